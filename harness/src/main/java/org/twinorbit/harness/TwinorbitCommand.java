@@ -1,0 +1,30 @@
+package org.twinorbit.harness;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The top-level command: only subcommands do work. */
+@Command(name = "twinorbit",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = {
+            "Runs the same charged particles as full orbits and as guiding centers through the same",
+            "fields, and measures how well each integrator and each model keeps the physics."},
+        subcommands = {FieldsCommand.class, CommandLine.HelpCommand.class})
+public final class TwinorbitCommand implements Runnable {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command (see --help)");
+    }
+
+    /** The configured command line; tests run commands through this, in-process. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new TwinorbitCommand());
+        cl.setExecutionExceptionHandler(new UserErrorHandler());
+        return cl;
+    }
+}
