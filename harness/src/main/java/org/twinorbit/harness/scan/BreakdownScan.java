@@ -1,0 +1,43 @@
+package org.twinorbit.harness.scan;
+
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One breakdown scan from start to written files: points measured in parallel with a checkpoint
+ * after each, ε* found for every metric, tolerance and pitch angle, outputs written atomically.
+ *
+ * @param settings   what the points depend on (field, species, ε grid, ensemble, duration, ...);
+ *                   written to scan.json and compared on {@code --resume}
+ * @param eps        the ε grid, increasing
+ * @param pitches    pitch angles (degrees)
+ * @param axis       what ε means and how it reads as an energy
+ * @param tolerances metric -> tolerances at which to find ε*
+ */
+public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Double> pitches, ScanAxis axis,
+                            Map<ScanMetric, List<Double>> tolerances) {
+
+    public BreakdownScan {
+        settings = new LinkedHashMap<>(settings);
+        eps = eps.clone();
+        pitches = List.copyOf(pitches);
+        tolerances = new LinkedHashMap<>(tolerances);
+    }
+
+    /**
+     * Measures every point not already saved, then writes scan.md/.csv/.json/.png into
+     * {@code out} and removes the partial results.
+     *
+     * @param resume true to take up the points saved by an interrupted run of the same scan
+     */
+    public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int threads, ScanProgress progress) {
+        ScanCheckpoint cp = ScanCheckpoint.open(out, settings, resume);
+        List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, threads, progress);
+        ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis));
+        ScanOutputs.write(r, out);
+        cp.delete();
+        return r;
+    }
+}

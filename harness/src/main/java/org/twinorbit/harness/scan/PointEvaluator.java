@@ -1,0 +1,22 @@
+package org.twinorbit.harness.scan;
+
+import java.util.Map;
+
+/**
+ * Measures the model error at one point of a scan. Implementations are thread-safe and
+ * deterministic: the result depends on the arguments only, never on the thread that computes
+ * it or on what else runs, so that a scan gives the same numbers for any thread count and after
+ * a resume.
+ */
+@FunctionalInterface
+public interface PointEvaluator {
+
+    /**
+     * @param eps      ε of the point
+     * @param energyEv kinetic energy (eV)
+     * @param pitchDeg pitch angle (degrees)
+     * @return snake_case name -> value, in the order to report them: each metric's
+     *         {@code _mean} and {@code _worst} over the gyrophase ensemble (see {@link ScanMetric})
+     */
+    Map<String, Double> measure(double eps, double energyEv, double pitchDeg);
+}

@@ -1,0 +1,124 @@
+package org.twinorbit.harness.scan;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The JSON form of a scan (scan.json), the documented contract:
+ * <ul>
+ * <li>{@code scan}: the settings (field, parameters, species, axis, ε range, ensemble, duration);
+ * <li>{@code points}: one object per ε and pitch angle with {@code eps}, {@code energy_ev},
+ *     {@code pitch_deg}, and for each metric {@code <metric>_mean} and {@code <metric>_worst}
+ *     over the gyrophase ensemble (plus {@code kappa} for current sheets);
+ * <li>{@code thresholds}: one per metric, tolerance and pitch angle with {@code metric},
+ *     {@code tolerance}, {@code pitch_deg}, {@code eps_star}, {@code energy_ev_star},
+ *     {@code outcome} ({@code crossed}, {@code not-reached}, {@code exceeded-at-start},
+ *     {@code no-data}).
+ * </ul>
+ * A value that was not measured is {@code null}; an orbit that failed makes a worst case
+ * {@code "inf"}. Numbers are written in their shortest exact form, so they read back unchanged.
+ */
+public final class ScanJson {
+
+    static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ScanJson() {}
+
+    /** The whole scan as JSON text. */
+    public static String toJson(ScanResult r) {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("scan", r.settings());
+        List<Object> points = new ArrayList<>();
+        for (ScanPoint p : r.points()) {
+            points.add(pointMap(p));
+        }
+        root.put("points", points);
+        List<Object> thresholds = new ArrayList<>();
+        for (Threshold t : r.thresholds()) {
+            thresholds.add(thresholdMap(t, r.axis()));
+        }
+        root.put("thresholds", thresholds);
+        return write(root);
+    }
+
+    static String write(Object tree) {
+        try {
+            return MAPPER.writeValueAsString(tree) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** One point as an ordered map ready for Jackson. */
+    static Map<String, Object> pointMap(ScanPoint p) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("eps", p.eps());
+        m.put("energy_ev", p.energyEv());
+        m.put("pitch_deg", p.pitchDeg());
+        for (Map.Entry<String, Double> e : p.values().entrySet()) {
+            m.put(e.getKey(), number(e.getValue()));
+        }
+        return m;
+    }
+
+    /** Reads back a point written by {@link #pointMap}. */
+    static ScanPoint readPoint(JsonNode n) {
+        Map<String, Double> values = new LinkedHashMap<>();
+        for (Iterator<Map.Entry<String, JsonNode>> it = n.fields(); it.hasNext(); ) {
+            Map.Entry<String, JsonNode> e = it.next();
+            String k = e.getKey();
+            if (!k.equals("eps") && !k.equals("energy_ev") && !k.equals("pitch_deg")) {
+                values.put(k, readNumber(e.getValue()));
+            }
+        }
+        return new ScanPoint(n.get("eps").asDouble(), n.get("energy_ev").asDouble(),
+                n.get("pitch_deg").asDouble(), values);
+    }
+
+    static Map<String, Object> thresholdMap(Threshold t, ScanAxis axis) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("metric", t.metric().key());
+        m.put("tolerance", t.tolerance());
+        m.put("pitch_deg", t.pitchDeg());
+        m.put("eps_star", number(t.epsStar()));
+        m.put("energy_ev_star", number(t.energyEvStar()));
+        if (axis.derivedName() != null) {
+            m.put(axis.derivedName() + "_star", t.outcome() == ThresholdOutcome.CROSSED
+                    ? number(axis.derived().applyAsDouble(t.epsStar())) : null);
+        }
+        m.put("outcome", t.outcome().label());
+        return m;
+    }
+
+    /** NaN as null, ±∞ as the strings "inf"/"-inf", finite values as numbers. */
+    static Object number(double v) {
+        if (Double.isNaN(v)) {
+            return null;
+        }
+        if (Double.isInfinite(v)) {
+            return v > 0 ? "inf" : "-inf";
+        }
+        return v;
+    }
+
+    static double readNumber(JsonNode n) {
+        if (n == null || n.isNull()) {
+            return Double.NaN;
+        }
+        if (n.isTextual()) {
+            return switch (n.asText()) {
+                case "inf" -> Double.POSITIVE_INFINITY;
+                case "-inf" -> Double.NEGATIVE_INFINITY;
+                default -> throw new IllegalArgumentException("not a number: '" + n.asText() + "'");
+            };
+        }
+        return n.asDouble();
+    }
+}

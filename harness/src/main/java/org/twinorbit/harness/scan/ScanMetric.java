@@ -1,0 +1,79 @@
+package org.twinorbit.harness.scan;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+/**
+ * The model errors a breakdown scan measures at every ε (DESIGN.md "What is measured"), each the
+ * guiding-center reference against the gyro-averaged full-orbit reference, with the default
+ * tolerance at which its ε* is found.
+ */
+public enum ScanMetric {
+    /** Irreversible change of the gyro-averaged μ, relative; the μ breakdown is found on this one. */
+    MU_JUMP("mu_jump", "irreversible change of gyro-averaged mu (relative)", 0.01),
+    /** Largest change of the gyro-averaged μ, reversible ripple included; reported, not thresholded. */
+    MU_CHANGE("mu_change", "largest change of gyro-averaged mu, ripple included (relative)", Double.NaN),
+    /** Mean perpendicular drift of the guiding center against the full orbit's, relative. */
+    DRIFT_ERROR("drift_error", "perpendicular drift velocity error (relative)", 0.05),
+    /** Guiding-center position at the end against the full orbit's, in initial gyroradii. */
+    POSITION_ERROR("position_error_rho", "end position error (units of rho0)", 1.0),
+    /** Bounce period of trapped orbits against the full orbit's, relative. */
+    BOUNCE_ERROR("bounce_period_error", "bounce period error of trapped orbits (relative)", 0.01),
+    /**
+     * Fraction of the ensemble whose fate differs between the models (trapped in one, lost in the
+     * other): a breakdown of its own, so any difference at all exceeds the default tolerance 0.
+     */
+    CLASS_CHANGE("class_change", "fraction of orbits trapped in one model and lost in the other", 0.0);
+
+    private final String key;
+    private final String description;
+    private final double defaultTolerance;
+
+    ScanMetric(String key, String description, double defaultTolerance) {
+        this.key = key;
+        this.description = description;
+        this.defaultTolerance = defaultTolerance;
+    }
+
+    /** The snake_case name used in JSON, CSV and options. */
+    public String key() {
+        return key;
+    }
+
+    public String description() {
+        return description;
+    }
+
+    /** The default tolerance; NaN for a metric reported beside another and not thresholded. */
+    public double defaultTolerance() {
+        return defaultTolerance;
+    }
+
+    /** True when a threshold ε* is found for this metric by default. */
+    public boolean thresholded() {
+        return !Double.isNaN(defaultTolerance);
+    }
+
+    /** The JSON/CSV key of the mean over the gyrophase ensemble. */
+    public String meanKey() {
+        return key + "_mean";
+    }
+
+    /** The JSON/CSV key of the worst case over the gyrophase ensemble. */
+    public String worstKey() {
+        return key + "_worst";
+    }
+
+    /** The metric with this key. @throws IllegalArgumentException listing the allowed keys */
+    public static ScanMetric ofKey(String key) {
+        String k = key.trim().toLowerCase(Locale.ROOT);
+        for (ScanMetric m : values()) {
+            if (m.key.equals(k)) {
+                return m;
+            }
+        }
+        throw new IllegalArgumentException("unknown metric '" + key + "'; allowed: "
+                + Arrays.stream(values()).map(ScanMetric::key).collect(Collectors.joining(", ")));
+    }
+}

@@ -1,0 +1,17 @@
+package org.twinorbit.harness.scan;
+
+import java.nio.file.Path;
+
+/** Writes a scan's files into an output directory, each atomically. */
+public final class ScanOutputs {
+
+    private ScanOutputs() {}
+
+    /** Writes scan.md, scan.csv, scan.json and scan.png into {@code dir}. */
+    public static void write(ScanResult r, Path dir) {
+        AtomicFiles.writeString(dir.resolve("scan.json"), ScanJson.toJson(r));
+        AtomicFiles.writeString(dir.resolve("scan.csv"), ScanTables.csv(r));
+        AtomicFiles.writeString(dir.resolve("scan.md"), ScanTables.markdown(r));
+        ScanPlot.write(r, dir.resolve("scan.png"));
+    }
+}

@@ -1,0 +1,129 @@
+package org.twinorbit.harness.scan;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.lines.SeriesLines;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.twinorbit.harness.Format;
+
+/**
+ * The scan plot (PNG): one log-log panel per thresholded metric, the worst case over the
+ * gyrophase ensemble against ε for every pitch angle (the μ panel shows mu_change beside
+ * mu_jump), the tolerance as a dashed line, ε* as a marker whose legend entry gives ε* and the
+ * energy there, and the energy range of the scan in the axis title.
+ */
+public final class ScanPlot {
+
+    private static final int WIDTH = 640;
+    private static final int HEIGHT = 440;
+
+    private ScanPlot() {}
+
+    /** Writes the plot atomically to {@code file}; writes nothing when no metric has a positive value. */
+    public static void write(ScanResult r, Path file) {
+        System.setProperty("java.awt.headless", "true");
+        List<XYChart> charts = new ArrayList<>();
+        for (ScanMetric m : ScanMetric.values()) {
+            if (m.thresholded() && m != ScanMetric.CLASS_CHANGE) {
+                XYChart c = chart(r, m);
+                if (c != null) {
+                    charts.add(c);
+                }
+            }
+        }
+        if (charts.isEmpty()) {
+            return; // nothing was measured that a log-log panel could show
+        }
+        // XChart fills every cell of the grid, so the grid must hold exactly the panels: up to
+        // three in a row, four as 2 x 2.
+        int cols = charts.size() == 4 ? 2 : charts.size();
+        int rows = charts.size() / cols;
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            BitmapEncoder.saveBitmap(charts, rows, cols, bytes, BitmapEncoder.BitmapFormat.PNG);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        AtomicFiles.write(file, bytes.toByteArray());
+    }
+
+    /** The panel of one metric, or null when nothing of it was measured. */
+    private static XYChart chart(ScanResult r, ScanMetric m) {
+        List<ScanPoint> pts = r.points();
+        double epsMin = pts.stream().mapToDouble(ScanPoint::eps).min().orElse(Double.NaN);
+        double epsMax = pts.stream().mapToDouble(ScanPoint::eps).max().orElse(Double.NaN);
+        String xTitle = "eps = " + r.axis().meaning();
+        if (r.axis().variesEnergy()) {
+            xTitle += "   (" + Format.number(r.axis().energyEv().applyAsDouble(epsMin)) + " to "
+                    + Format.number(r.axis().energyEv().applyAsDouble(epsMax)) + " eV)";
+        }
+        XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(m.description())
+                .xAxisTitle(xTitle).yAxisTitle(m.key() + " (worst over gyrophases)").build();
+        c.getStyler().setXAxisLogarithmic(true).setYAxisLogarithmic(true)
+                .setLegendPosition(Styler.LegendPosition.InsideNW);
+        boolean any = false;
+        List<Double> pitches = pts.stream().map(ScanPoint::pitchDeg).distinct().toList();
+        for (double pitch : pitches) {
+            any |= curve(c, pts, pitch, m, m.key() + " @ " + Format.number(pitch) + " deg", SeriesLines.SOLID);
+            if (m == ScanMetric.MU_JUMP) {
+                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE,
+                        "mu_change @ " + Format.number(pitch) + " deg", SeriesLines.DOT_DOT);
+            }
+        }
+        if (!any) {
+            return null;
+        }
+        for (Threshold t : r.thresholds()) {
+            if (t.metric() != m || !(t.tolerance() > 0)) {
+                continue;
+            }
+            String tolName = "tolerance " + Format.number(t.tolerance());
+            if (!c.getSeriesMap().containsKey(tolName)) {
+                XYSeries s = c.addSeries(tolName, new double[] {epsMin, epsMax},
+                        new double[] {t.tolerance(), t.tolerance()});
+                s.setMarker(SeriesMarkers.NONE);
+                s.setLineStyle(SeriesLines.DASH_DASH);
+            }
+            if (t.outcome() == ThresholdOutcome.CROSSED) {
+                String label = "eps* = " + Format.number(t.epsStar()) + " @ " + Format.number(t.pitchDeg()) + " deg"
+                        + (r.axis().variesEnergy() ? " (" + Format.number(t.energyEvStar()) + " eV)" : "");
+                if (!c.getSeriesMap().containsKey(label)) {
+                    XYSeries s = c.addSeries(label, new double[] {t.epsStar()}, new double[] {t.tolerance()});
+                    s.setMarker(SeriesMarkers.DIAMOND);
+                    s.setLineStyle(SeriesLines.NONE);
+                }
+            }
+        }
+        return c;
+    }
+
+    /** Adds the positive finite worst-case values of one metric at one pitch; false if none. */
+    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, ScanMetric m, String name,
+                                 java.awt.BasicStroke line) {
+        List<Double> xs = new ArrayList<>();
+        List<Double> ys = new ArrayList<>();
+        for (ScanPoint p : pts) {
+            double v = p.worst(m);
+            if (p.pitchDeg() == pitch && v > 0 && Double.isFinite(v)) {
+                xs.add(p.eps());
+                ys.add(v);
+            }
+        }
+        if (xs.isEmpty()) {
+            return false;
+        }
+        XYSeries s = c.addSeries(name, xs, ys);
+        s.setMarker(SeriesMarkers.CIRCLE);
+        s.setLineStyle(line);
+        return true;
+    }
+}

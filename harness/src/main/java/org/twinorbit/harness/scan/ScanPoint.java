@@ -1,0 +1,37 @@
+package org.twinorbit.harness.scan;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * The measured model error at one ε and one pitch angle.
+ *
+ * @param eps      ε of the point (ρ0/L, or the time-scale ratio of a time-dependent field)
+ * @param energyEv kinetic energy (eV)
+ * @param pitchDeg pitch angle (degrees)
+ * @param values   snake_case name -> value: each metric's {@code _mean} and {@code _worst}, plus
+ *                 quantities particular to the field (e.g. {@code kappa}); NaN where not measured
+ */
+public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String, Double> values) {
+
+    public ScanPoint {
+        values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+    }
+
+    /** The value under {@code key}, NaN when absent. */
+    public double value(String key) {
+        Double v = values.get(key);
+        return v == null ? Double.NaN : v;
+    }
+
+    /** The worst case of a metric over the ensemble, NaN when not measured. */
+    public double worst(ScanMetric m) {
+        return value(m.worstKey());
+    }
+
+    /** The mean of a metric over the ensemble, NaN when not measured. */
+    public double mean(ScanMetric m) {
+        return value(m.meanKey());
+    }
+}

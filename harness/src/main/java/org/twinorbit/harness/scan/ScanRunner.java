@@ -1,0 +1,94 @@
+package org.twinorbit.harness.scan;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.Future;
+
+/**
+ * Runs the points of a scan in parallel, saving each to the checkpoint as it completes.
+ *
+ * <p>Points run as tasks of one {@link ForkJoinPool} with the requested number of threads; an
+ * evaluator that splits its own work with parallel streams (e.g. over the gyrophase ensemble)
+ * runs that work in the same pool, so idle threads help with whichever point is still going.
+ * Every result is stored by its index, never in completion order, so the output does not depend
+ * on the thread count.
+ */
+public final class ScanRunner {
+
+    private ScanRunner() {}
+
+    /**
+     * @param eps         the ε grid, increasing
+     * @param pitches     pitch angles (degrees)
+     * @param axis        how ε reads as an energy (and any derived quantity such as κ)
+     * @param evaluator   measures one point
+     * @param checkpoint  where finished points are saved and resumed from
+     * @param threads     worker threads, ≥ 1
+     * @param progress    told of every finished point
+     * @return the points, pitch-major then increasing ε
+     */
+    public static List<ScanPoint> run(double[] eps, List<Double> pitches, ScanAxis axis,
+                                      PointEvaluator evaluator, ScanCheckpoint checkpoint,
+                                      int threads, ScanProgress progress) {
+        if (threads < 1) {
+            throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
+        }
+        int total = eps.length * pitches.size();
+        ScanPoint[] out = new ScanPoint[total];
+        List<Integer> pending = new ArrayList<>();
+        for (int k = 0; k < total; k++) {
+            ScanPoint saved = checkpoint.get(pitches.get(k / eps.length), eps[k % eps.length]);
+            if (saved != null) {
+                out[k] = saved;
+            } else {
+                pending.add(k);
+            }
+        }
+        progress.start(total, total - pending.size());
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        try {
+            List<Future<?>> futures = new ArrayList<>();
+            for (int k : pending) {
+                double e = eps[k % eps.length];
+                double pitch = pitches.get(k / eps.length);
+                futures.add(pool.submit(() -> {
+                    ScanPoint p = measure(e, pitch, axis, evaluator);
+                    checkpoint.add(p);
+                    out[k] = p;
+                    progress.pointDone();
+                }));
+            }
+            for (Future<?> f : futures) {
+                f.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("scan interrupted", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+        return List.of(out);
+    }
+
+    private static ScanPoint measure(double eps, double pitch, ScanAxis axis, PointEvaluator evaluator) {
+        double energy = axis.energyEv().applyAsDouble(eps);
+        Map<String, Double> values = new LinkedHashMap<>();
+        if (axis.derivedName() != null) {
+            values.put(axis.derivedName(), axis.derived().applyAsDouble(eps));
+        }
+        values.putAll(evaluator.measure(eps, energy, pitch));
+        return new ScanPoint(eps, energy, pitch, values);
+    }
+}

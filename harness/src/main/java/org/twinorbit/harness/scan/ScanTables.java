@@ -1,0 +1,106 @@
+package org.twinorbit.harness.scan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.twinorbit.harness.Format;
+
+/** The Markdown (scan.md) and CSV (scan.csv) forms of a scan. */
+public final class ScanTables {
+
+    private ScanTables() {}
+
+    /** Column names of the points table: ε, energy, pitch, then every value of the points. */
+    static List<String> columns(ScanResult r) {
+        List<String> cols = new ArrayList<>(List.of("eps", "energy_ev", "pitch_deg"));
+        for (ScanPoint p : r.points()) {
+            for (String k : p.values().keySet()) {
+                if (!cols.contains(k)) {
+                    cols.add(k);
+                }
+            }
+        }
+        return cols;
+    }
+
+    private static double cell(ScanPoint p, String col) {
+        return switch (col) {
+            case "eps" -> p.eps();
+            case "energy_ev" -> p.energyEv();
+            case "pitch_deg" -> p.pitchDeg();
+            default -> p.value(col);
+        };
+    }
+
+    /** One row per point; full precision, empty where not measured, {@code inf} for a failed orbit. */
+    public static String csv(ScanResult r) {
+        List<String> cols = columns(r);
+        StringBuilder sb = new StringBuilder(String.join(",", cols)).append('\n');
+        for (ScanPoint p : r.points()) {
+            List<String> cells = new ArrayList<>();
+            for (String c : cols) {
+                double v = cell(p, c);
+                cells.add(Double.isNaN(v) ? "" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : Double.toString(v));
+            }
+            sb.append(String.join(",", cells)).append('\n');
+        }
+        return sb.toString();
+    }
+
+    /** Settings, the thresholds, then every point, for people. */
+    public static String markdown(ScanResult r) {
+        StringBuilder sb = new StringBuilder("# Breakdown scan\n\n");
+        for (Map.Entry<String, Object> e : r.settings().entrySet()) {
+            sb.append("- ").append(e.getKey()).append(": ").append(show(e.getValue())).append('\n');
+        }
+        sb.append("\nModel error: the guiding-center reference against the gyro-averaged full-orbit ")
+                .append("reference, both at tight tolerance; worst case over the gyrophase ensemble. ")
+                .append("eps* is the first eps (").append(r.axis().meaning())
+                .append(") whose worst-case error exceeds the tolerance, refined by log-log interpolation.\n\n");
+        sb.append("## Thresholds\n\n");
+        String derived = r.axis().derivedName();
+        sb.append("| metric | tolerance | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
+                .append(derived == null ? "" : " " + derived + "* |").append('\n');
+        sb.append("|---|---|---|---|---|---|").append(derived == null ? "" : "---|").append('\n');
+        for (Threshold t : r.thresholds()) {
+            boolean crossed = t.outcome() == ThresholdOutcome.CROSSED;
+            sb.append("| ").append(t.metric().key()).append(" | ").append(Format.number(t.tolerance()))
+                    .append(" | ").append(Format.number(t.pitchDeg())).append(" | ").append(t.outcome().label())
+                    .append(" | ").append(crossed ? Format.number(t.epsStar()) : "—")
+                    .append(" | ").append(crossed && r.axis().variesEnergy() ? Format.number(t.energyEvStar()) : "—")
+                    .append(" |");
+            if (derived != null) {
+                sb.append(' ').append(crossed ? Format.number(r.axis().derived().applyAsDouble(t.epsStar())) : "—")
+                        .append(" |");
+            }
+            sb.append('\n');
+        }
+        sb.append("\n## Points\n\n");
+        List<String> cols = columns(r);
+        sb.append("| ").append(String.join(" | ", cols)).append(" |\n|");
+        sb.append("---|".repeat(cols.size())).append('\n');
+        for (ScanPoint p : r.points()) {
+            sb.append('|');
+            for (String c : cols) {
+                sb.append(' ').append(Format.number(cell(p, c))).append(" |");
+            }
+            sb.append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static String show(Object v) {
+        if (v instanceof Double d) {
+            return Format.number(d);
+        }
+        if (v instanceof List<?> l) {
+            return String.join(", ", l.stream().map(ScanTables::show).toList());
+        }
+        if (v instanceof Map<?, ?> m) {
+            List<String> parts = new ArrayList<>();
+            m.forEach((k, x) -> parts.add(k + " = " + show(x)));
+            return parts.isEmpty() ? "(defaults)" : String.join(", ", parts);
+        }
+        return String.valueOf(v);
+    }
+}

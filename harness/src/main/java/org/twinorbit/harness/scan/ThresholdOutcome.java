@@ -1,0 +1,34 @@
+package org.twinorbit.harness.scan;
+
+/** How a metric's worst-case error stands against a tolerance over the scanned range of ε. */
+public enum ThresholdOutcome {
+    /** The error first exceeds the tolerance inside the range; ε* is a number. */
+    CROSSED("crossed"),
+    /** The error stays within the tolerance up to the largest ε scanned; no ε* in range. */
+    NOT_REACHED("not-reached"),
+    /** The error already exceeds the tolerance at the smallest ε scanned; no ε* in range. */
+    EXCEEDED_AT_START("exceeded-at-start"),
+    /** The metric was not measured at any point (it does not apply to these orbits). */
+    NO_DATA("no-data");
+
+    private final String label;
+
+    ThresholdOutcome(String label) {
+        this.label = label;
+    }
+
+    /** The word used in tables and JSON. */
+    public String label() {
+        return label;
+    }
+
+    /** The outcome with this label. @throws IllegalArgumentException for an unknown label */
+    public static ThresholdOutcome ofLabel(String label) {
+        for (ThresholdOutcome o : values()) {
+            if (o.label.equals(label)) {
+                return o;
+            }
+        }
+        throw new IllegalArgumentException("unknown threshold outcome '" + label + "'");
+    }
+}
