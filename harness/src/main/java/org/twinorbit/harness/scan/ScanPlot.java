@@ -18,13 +18,13 @@ import org.twinorbit.harness.Format;
 /**
  * The scan plot (PNG): one log-log panel per thresholded metric, the worst case over the
  * gyrophase ensemble against ε for every pitch angle (the μ panel shows mu_change beside
- * mu_jump), the tolerance as a dashed line, ε* as a marker whose legend entry gives ε* and the
+ * mu_jump), the tolerance as a dashed line, errors more than eight decades below it left out, ε* as a marker whose legend entry gives ε* and the
  * energy there, and the energy range of the scan in the axis title.
  */
 public final class ScanPlot {
 
     private static final int WIDTH = 640;
-    private static final int HEIGHT = 440;
+    private static final int HEIGHT = 600;
 
     private ScanPlot() {}
 
@@ -69,13 +69,15 @@ public final class ScanPlot {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(m.description())
                 .xAxisTitle(xTitle).yAxisTitle(m.key() + " (worst over gyrophases)").build();
         c.getStyler().setXAxisLogarithmic(true).setYAxisLogarithmic(true)
-                .setLegendPosition(Styler.LegendPosition.InsideNW);
+                .setLegendPosition(Styler.LegendPosition.OutsideS)
+                .setLegendLayout(Styler.LegendLayout.Vertical);
+        double floor = floor(r, m);
         boolean any = false;
         List<Double> pitches = pts.stream().map(ScanPoint::pitchDeg).distinct().toList();
         for (double pitch : pitches) {
-            any |= curve(c, pts, pitch, m, m.key() + " @ " + Format.number(pitch) + " deg", SeriesLines.SOLID);
+            any |= curve(c, pts, pitch, m, floor, m.key() + " @ " + Format.number(pitch) + " deg", SeriesLines.SOLID);
             if (m == ScanMetric.MU_JUMP) {
-                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE,
+                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE, floor,
                         "mu_change @ " + Format.number(pitch) + " deg", SeriesLines.DOT_DOT);
             }
         }
@@ -106,14 +108,24 @@ public final class ScanPlot {
         return c;
     }
 
-    /** Adds the positive finite worst-case values of one metric at one pitch; false if none. */
-    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, ScanMetric m, String name,
-                                 java.awt.BasicStroke line) {
+    /**
+     * The smallest error drawn: eight decades below the smallest tolerance. Exponentially small
+     * errors (μ jumps at small ε) would otherwise stretch the axis over tens of decades.
+     */
+    private static double floor(ScanResult r, ScanMetric m) {
+        double tol = r.thresholds().stream().filter(t -> t.metric() == m && t.tolerance() > 0)
+                .mapToDouble(Threshold::tolerance).min().orElse(Double.NaN);
+        return Double.isNaN(tol) ? 0 : tol * 1e-8;
+    }
+
+    /** Adds the finite worst-case values above {@code floor} of one metric at one pitch; false if none. */
+    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, ScanMetric m, double floor,
+                                 String name, java.awt.BasicStroke line) {
         List<Double> xs = new ArrayList<>();
         List<Double> ys = new ArrayList<>();
         for (ScanPoint p : pts) {
             double v = p.worst(m);
-            if (p.pitchDeg() == pitch && v > 0 && Double.isFinite(v)) {
+            if (p.pitchDeg() == pitch && v > floor && v > 0 && Double.isFinite(v)) {
                 xs.add(p.eps());
                 ys.add(v);
             }
