@@ -7,6 +7,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.UUID;
 
 /**
  * Writes a file so that readers see either the old content or the new one, never half of it
@@ -27,7 +28,8 @@ final class AtomicFiles {
         try {
             Path dir = target.toAbsolutePath().getParent();
             Files.createDirectories(dir);
-            Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
+            // a plain name, not createTempFile, so that the file gets the usual permissions
+            Path tmp = dir.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".tmp");
             try {
                 Files.write(tmp, bytes);
                 try {

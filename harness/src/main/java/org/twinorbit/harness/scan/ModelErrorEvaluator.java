@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -35,7 +36,8 @@ import org.twinorbit.shared.Vec3;
  * without a bounce), or, in a time-dependent field, the RMS over gyrations of the difference of
  * the perpendicular displacements (their means vanish over whole wave periods);
  * {@code position_error_rho}; {@code bounce_period_error}; {@code class_change} (1 when one model
- * leaves the domain and the other does not). A guiding center that fails (B*∥ ≤ 0, or
+ * leaves the domain and the other does not). Beside them, the cost: field evaluations of the
+ * full-orbit references (all phases) and of the guiding-center reference. A guiding center that fails (B*∥ ≤ 0, or
  * integration failure) makes every error of the point infinite: the model broke down.
  */
 public final class ModelErrorEvaluator implements PointEvaluator {
@@ -105,12 +107,14 @@ public final class ModelErrorEvaluator implements PointEvaluator {
         boolean gcFailed = gc.status() == OrbitStatus.MODEL_FAILURE || gc.status() == OrbitStatus.UNSTABLE;
 
         double[][] perPhase = new double[phases][];
+        long[] foEvaluations = new long[phases];
         IntStream.range(0, phases).parallel().forEach(k -> {
             Placement pk = Placement.of(f, species, rc.start(), u, pitchDeg, 2 * Math.PI * k / phases);
             GyroAverager gyro = new GyroAverager(f, species, deadband);
             FullOrbitReference.Result fo = new FullOrbitReference(f, species, rtol)
                     .run(0, pk.x(), pk.u(), tEnd, tc / FULL_ORBIT_SAMPLES_PER_GYRO, gyro);
             perPhase[k] = compare(rc, fo, gyro, gc, gcRec.track(), gcFailed, u);
+            foEvaluations[k] = fo.evaluations();
         });
 
         Map<String, Double> out = new LinkedHashMap<>();
@@ -124,6 +128,9 @@ public final class ModelErrorEvaluator implements PointEvaluator {
             out.put(metrics[m].meanKey(), s.mean());
             out.put(metrics[m].worstKey(), s.worst());
         }
+        // the cost, counted rather than timed so that the output stays reproducible
+        out.put("full_orbit_evaluations", (double) Arrays.stream(foEvaluations).sum());
+        out.put("guiding_center_evaluations", (double) gc.fieldEvaluations());
         return out;
     }
 
@@ -172,7 +179,7 @@ public final class ModelErrorEvaluator implements PointEvaluator {
             return m;
         }
         if (fo.status() == OrbitStatus.UNSTABLE) {
-            java.util.Arrays.fill(m, Double.NaN);
+            Arrays.fill(m, Double.NaN);
             return m;
         }
         Track centers = gyro.centers();

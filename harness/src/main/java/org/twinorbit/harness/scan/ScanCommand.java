@@ -6,12 +6,9 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.twinorbit.fields.Field;
-import org.twinorbit.fields.Fields;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.shared.Species;
-import org.twinorbit.shared.Vec3;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -31,9 +28,15 @@ import picocli.CommandLine.Spec;
             "interpolation. Writes scan.md, scan.csv, scan.json and scan.png into --out."})
 public final class ScanCommand implements Runnable {
 
-    @Option(names = "--field", required = true, paramLabel = "NAME",
-            description = "Field of the library (see 'twinorbit fields').")
+    @Option(names = "--field", paramLabel = "NAME",
+            description = "Field of the library (see 'twinorbit fields'); required unless --safe-use.")
     String field;
+
+    @Option(names = "--safe-use",
+            description = "Scan every field of the library for protons and electrons at the default tolerances "
+                    + "and write the safe-use map (safe-use.md, .csv, .json, .png) into --out; --points and "
+                    + "--phases set the resolution.")
+    boolean safeUse;
 
     @Option(names = "--param", paramLabel = "NAME=VALUE",
             description = "Field parameter override, repeatable (e.g. --param Rm=8).")
@@ -106,7 +109,11 @@ public final class ScanCommand implements Runnable {
 
     @Override
     public void run() {
-        ScanSetup setup = setup();
+        if (safeUse) {
+            runSafeUse();
+            return;
+        }
+        ScanRequest.Built setup = setup();
         long t0 = System.nanoTime();
         ScanResult r;
         if (quiet) {
@@ -122,107 +129,59 @@ public final class ScanCommand implements Runnable {
         w.flush();
     }
 
-    /** Checks every option and builds the scan; no orbit is computed here. */
-    ScanSetup setup() {
+    private void runSafeUse() {
+        if (field != null) {
+            throw new IllegalArgumentException("--safe-use scans every field of the library; drop --field " + field);
+        }
         if (threads < 1) {
             throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
         }
-        Species s = Species.parse(species);
-        ScanField recipe = ScanField.of(field);
-        if (recipe.timeScale() && params.containsKey(recipe.parameter())) {
-            throw new IllegalArgumentException("--param " + recipe.parameter() + ": the scan sets it from eps; "
-                    + "choose the range with --eps-min and --eps-max instead");
+        if (points < 2 || phases < 1 || phases > 1024) {
+            throw new IllegalArgumentException("--safe-use needs --points >= 2 and --phases in [1, 1024], got "
+                    + points + " and " + phases);
         }
-        double lo = epsMin != null ? epsMin : recipe.epsMin();
-        double hi = epsMax != null ? epsMax : recipe.epsMax();
-        double[] eps = EpsilonGrid.logSpaced(lo, hi, points);
-        Field f = Fields.create(field, recipe.parametersAt(params, lo), s);
-        Vec3 x0 = start(f, recipe);
-        List<Double> pitch = pitches != null ? pitches : List.of(recipe.pitchDeg());
-        for (double p : pitch) {
-            if (!(p >= 0 && p <= 180)) {
-                throw new IllegalArgumentException("--pitch must lie in [0, 180] degrees, got " + p);
-            }
-        }
-        ScanDuration d = new ScanDuration(duration != null ? duration : recipe.duration().value(),
-                durationUnit != null ? ScanDuration.Unit.parse(durationUnit) : recipe.duration().unit());
-        if (!(referenceRtol >= 1e-13 && referenceRtol <= 1e-6)) {
-            throw new IllegalArgumentException("--reference-rtol must lie in [1e-13, 1e-6], got " + referenceRtol);
-        }
-        ScanAxis axis;
-        if (recipe.timeScale()) {
-            double w = energy != null ? energy : recipe.energyEv();
-            if (!(w > 0 && Double.isFinite(w))) {
-                throw new IllegalArgumentException("--energy must be a finite number > 0 eV, got " + w);
-            }
-            if (field.equals("wave") && hi >= 0.999) {
-                throw new IllegalArgumentException("--eps-max must stay below 0.999 for the wave (cyclotron resonance at 1), got " + hi);
-            }
-            axis = ScanAxis.timeScale(recipe.meaning(field), w);
+        long t0 = System.nanoTime();
+        SafeUseMap.Resolution res = new SafeUseMap.Resolution(points, phases);
+        SafeUseMap.Result r;
+        if (quiet) {
+            r = SafeUseMap.run(out, res, resume, threads, ScanProgress.NONE);
         } else {
-            if (energy != null) {
-                throw new IllegalArgumentException("--energy applies to ramp and wave only: field '" + field
-                        + "' scans eps through the energy");
+            try (ScanProgressBar bar = new ScanProgressBar("safe-use map")) {
+                r = SafeUseMap.run(out, res, resume, threads, bar);
             }
-            if (!f.isStatic()) {
-                throw new IllegalArgumentException("--field: '" + field + "' depends on time but has no scan recipe;"
-                        + " time-dependent fields that can be scanned: ramp, wave");
-            }
-            EnergyScale scale = new EnergyScale(f, s, x0);
-            axis = field.equals("current-sheet") ? ScanAxis.currentSheet(scale) : ScanAxis.energy(scale);
         }
-        Map<ScanMetric, List<Double>> tol = tolerances();
-        Map<String, Object> settings = new LinkedHashMap<>();
-        settings.put("field", field);
-        settings.put("parameters", new LinkedHashMap<>(params));
-        settings.put("species", s.name());
-        settings.put("start_m", List.of(x0.x(), x0.y(), x0.z()));
-        settings.put("eps_meaning", axis.meaning());
-        if (!recipe.timeScale()) {
-            settings.put("L_m", f.length());
-        } else {
-            settings.put("energy_ev", axis.energyEv().applyAsDouble(lo));
-            settings.put("scanned_parameter", recipe.parameter());
-        }
-        settings.put("eps_min", lo);
-        settings.put("eps_max", hi);
-        settings.put("n_eps", points);
-        settings.put("pitch_deg", pitch);
-        settings.put("phases", phases);
-        settings.put("duration", d.value());
-        settings.put("duration_unit", d.unit().label());
-        settings.put("reference_rtol", referenceRtol);
-        ModelErrorEvaluator ev = new ModelErrorEvaluator(field, params, s, x0, phases, d,
-                recipe, referenceRtol);
-        return new ScanSetup(new BreakdownScan(settings, eps, pitch, axis, tol), ev);
+        PrintWriter w = spec.commandLine().getOut();
+        w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png (%d rows) in %.1f s%n", out,
+                r.rows().size(), (System.nanoTime() - t0) * 1e-9);
+        w.flush();
     }
 
-    /** The options' scan and the evaluator of its points. */
-    record ScanSetup(BreakdownScan scan, PointEvaluator evaluator) {}
-
-    private Vec3 start(Field f, ScanField recipe) {
-        if (start == null) {
-            return recipe.start(field, f);
+    /** Checks every option and builds the scan; no orbit is computed here. */
+    ScanRequest.Built setup() {
+        if (threads < 1) {
+            throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
         }
-        if (start.size() != 3 || start.stream().anyMatch(v -> !Double.isFinite(v))) {
-            throw new IllegalArgumentException("--start needs three finite coordinates x,y,z in m, got " + start);
-        }
-        Vec3 x0 = new Vec3(start.get(0), start.get(1), start.get(2));
-        if (!f.inDomain(x0.x(), x0.y(), x0.z())) {
-            throw new IllegalArgumentException("--start " + x0 + " lies outside the domain of field '" + field
-                    + "': " + f.domainMeaning());
-        }
-        return x0;
+        ScanRequest q = new ScanRequest();
+        q.field = field;
+        q.parameters = new LinkedHashMap<>(params);
+        q.species = Species.parse(species);
+        q.pitches = pitches;
+        q.epsMin = epsMin;
+        q.epsMax = epsMax;
+        q.points = points;
+        q.energyEv = energy;
+        q.start = start;
+        q.phases = phases;
+        q.duration = duration;
+        q.durationUnit = durationUnit == null ? null : ScanDuration.Unit.parse(durationUnit);
+        q.tolerances = tolerances();
+        q.referenceRtol = referenceRtol;
+        return q.build();
     }
 
-    /** Every thresholded metric at its default tolerance, replaced where --tolerance names it. */
+    /** The --tolerance options parsed; the request checks their values. */
     private Map<ScanMetric, List<Double>> tolerances() {
         Map<ScanMetric, List<Double>> tol = new LinkedHashMap<>();
-        for (ScanMetric m : ScanMetric.values()) {
-            if (m.thresholded()) {
-                tol.put(m, List.of(m.defaultTolerance()));
-            }
-        }
         for (Map.Entry<String, String> e : tolerances.entrySet()) {
             ScanMetric m;
             try {
@@ -230,22 +189,13 @@ public final class ScanCommand implements Runnable {
             } catch (IllegalArgumentException ex) {
                 throw new IllegalArgumentException("--tolerance: " + ex.getMessage());
             }
-            if (!m.thresholded()) {
-                throw new IllegalArgumentException("--tolerance: " + m.key() + " is reported beside mu_jump and has no "
-                        + "threshold; give mu_jump instead");
-            }
             List<Double> values = new ArrayList<>();
             for (String v : e.getValue().split(",")) {
-                double x;
                 try {
-                    x = Double.parseDouble(v.trim());
+                    values.add(Double.parseDouble(v.trim()));
                 } catch (NumberFormatException ex) {
                     throw new IllegalArgumentException("--tolerance " + m.key() + ": '" + v + "' is not a number");
                 }
-                if (!(x >= 0 && Double.isFinite(x))) {
-                    throw new IllegalArgumentException("--tolerance " + m.key() + " must be a finite number >= 0, got " + v);
-                }
-                values.add(x);
             }
             tol.put(m, values);
         }

@@ -34,7 +34,7 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
                     GYRO_20, Double.NaN, null);
             // 60° lies well outside the loss cone sin²α = 1/Rm = 1/4 of the default mirror
             case "mirror" -> new ScanField(3e-3, 0.3, 60, BOUNCE_3, Double.NaN, null);
-            case "dipole" -> new ScanField(1e-3, 0.1, 60, BOUNCE_3, Double.NaN, null);
+            case "dipole" -> new ScanField(1e-3, 0.3, 60, BOUNCE_3, Double.NaN, null);
             // trapped at the outboard start r = a/2 when sin²α > (1 − r/R0)/(1 + r/R0) = 0.71, α > 57.7°
             case "tokamak" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
             // 30° mirrors where |B| = 4 Bn, about 4 R_c from the sheet: each bounce crosses the
@@ -49,14 +49,23 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
     }
 
     /**
-     * The default initial guiding center: the field's own, except in the mirror, where the scan
-     * starts off the axis at r = 0.2 Lm in the midplane. On the axis a gyration ring is centred on
-     * the symmetry axis, its canonical angular momentum p_φ = m r u_φ + q r A_φ is fixed by μ
-     * alone, so μ cannot jump (Noether; common practice), and every gyrophase is the same orbit
-     * turned about the axis, which leaves the ensemble nothing to sample.
+     * The default initial guiding center: the field's own, except
+     * <ul>
+     * <li>in the mirror, where the scan starts off the axis at r = 0.2 Lm in the midplane. On the
+     *     axis a gyration ring is centred on the symmetry axis, its canonical angular momentum
+     *     p_φ = m r u_φ + q r A_φ is fixed by μ alone, so μ cannot jump (Noether; common
+     *     practice), and every gyrophase is the same orbit turned about the axis, which leaves the
+     *     ensemble nothing to sample;
+     * <li>in the ramp, where the scan starts at r = 0.1 m (about 20 gyroradii of a 1 keV proton at
+     *     1 T) so that the inward E×B drift of the compression, v_E = r/(2(τ + t)), is not zero.
+     * </ul>
      */
     public Vec3 start(String name, Field f) {
-        return name.equals("mirror") ? new Vec3(0.2 * f.length(), 0, 0) : f.defaultStart();
+        return switch (name) {
+            case "mirror" -> new Vec3(0.2 * f.length(), 0, 0);
+            case "ramp" -> new Vec3(0.1, 0, 0);
+            default -> f.defaultStart();
+        };
     }
 
     /** True when ε is a time-scale ratio set through a field parameter, at fixed energy. */

@@ -1,0 +1,291 @@
+package org.twinorbit.harness.scan;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.CategoryChart;
+import org.knowm.xchart.CategoryChartBuilder;
+import org.knowm.xchart.CategorySeries;
+import org.knowm.xchart.style.Styler;
+import org.twinorbit.fields.Field;
+import org.twinorbit.fields.FieldProvider;
+import org.twinorbit.fields.Fields;
+import org.twinorbit.harness.Format;
+import org.twinorbit.shared.Species;
+
+/**
+ * The safe-use map: for every field of the library, protons and electrons, and each metric at
+ * its default tolerance, ε* and the kinetic energy it corresponds to — where the guiding-center
+ * model stops being safe. One breakdown scan per field and species with the field's recipe
+ * ({@link ScanField}); fields without a length (uniform, crossed) have no ε and are listed as
+ * such. Writes safe-use.md, safe-use.csv, safe-use.json and safe-use.png.
+ */
+public final class SafeUseMap {
+
+    /** The species of the map. */
+    public static final List<Species> SPECIES = List.of(Species.PROTON, Species.ELECTRON);
+
+    /** Directory (inside the output directory) holding the partial scans until the map is written. */
+    static final String WORK_DIR = ".safe-use-partial";
+
+    /**
+     * How finely each scan samples.
+     *
+     * @param points ε values per scan
+     * @param phases gyrophase ensemble size
+     */
+    public record Resolution(int points, int phases) {
+        /** The committed map: the scan defaults. */
+        public static final Resolution FULL = new Resolution(16, 8);
+        /** For quick checks: coarse ε* (the interpolation still refines between points). */
+        public static final Resolution QUICK = new Resolution(6, 2);
+    }
+
+    /**
+     * One line of the map.
+     *
+     * @param field      field name
+     * @param species    species name
+     * @param epsMeaning what ε is for this field
+     * @param pitchDeg   pitch angle scanned (degrees)
+     * @param epsMin     smallest ε scanned
+     * @param epsMax     largest ε scanned
+     * @param threshold  ε* of one metric at its default tolerance
+     */
+    public record Row(String field, String species, String epsMeaning, double pitchDeg, double epsMin,
+                      double epsMax, Threshold threshold) {}
+
+    /**
+     * The computed map.
+     *
+     * @param rows    one per field, species and metric
+     * @param skipped field name -> why it has no row
+     */
+    public record Result(List<Row> rows, Map<String, String> skipped) {}
+
+    private SafeUseMap() {}
+
+    /**
+     * Runs every scan and writes the map into {@code out}.
+     *
+     * @param resume take up the scans an interrupted run left in {@code out}
+     */
+    public static Result run(Path out, Resolution res, boolean resume, int threads, ScanProgress progress) {
+        List<ScanRequest.Built> scans = new ArrayList<>();
+        List<String> names = new ArrayList<>();
+        Map<String, String> skipped = new LinkedHashMap<>();
+        for (FieldProvider p : Fields.all()) {
+            Field f = Fields.create(p.name(), Species.PROTON);
+            ScanField recipe = ScanField.of(p.name());
+            if (!recipe.timeScale() && !(Double.isFinite(f.length()) && f.isStatic())) {
+                skipped.put(p.name(), f.isStatic() ? "no length L: the guiding-center model has no eps to break down in"
+                        : "time-dependent without a scan recipe");
+                continue;
+            }
+            for (Species s : SPECIES) {
+                ScanRequest q = new ScanRequest();
+                q.field = p.name();
+                q.species = s;
+                q.points = res.points();
+                q.phases = res.phases();
+                scans.add(q.build());
+                names.add(p.name() + "-" + s.name());
+            }
+        }
+        int total = scans.stream().mapToInt(b -> b.scan().eps().length * b.scan().pitches().size()).sum();
+        Overall overall = new Overall(progress, total);
+        Path work = out.resolve(WORK_DIR);
+        List<Row> rows = new ArrayList<>();
+        for (int i = 0; i < scans.size(); i++) {
+            ScanRequest.Built b = scans.get(i);
+            ScanResult r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, threads, overall);
+            double[] eps = b.scan().eps();
+            for (Threshold t : r.thresholds()) {
+                rows.add(new Row((String) r.settings().get("field"), (String) r.settings().get("species"),
+                        r.axis().meaning(), t.pitchDeg(), eps[0], eps[eps.length - 1], t));
+            }
+        }
+        Result result = new Result(rows, skipped);
+        write(result, out);
+        deleteTree(work);
+        return result;
+    }
+
+    /** Writes safe-use.md, .csv, .json and .png into {@code out}, each atomically. */
+    public static void write(Result r, Path out) {
+        AtomicFiles.writeString(out.resolve("safe-use.md"), markdown(r));
+        AtomicFiles.writeString(out.resolve("safe-use.csv"), csv(r));
+        AtomicFiles.writeString(out.resolve("safe-use.json"), json(r));
+        plot(r, out.resolve("safe-use.png"));
+    }
+
+    static String markdown(Result r) {
+        StringBuilder sb = new StringBuilder("# Safe-use map of the guiding-center model\n\n");
+        sb.append("eps* is the first eps at which the model error (guiding-center reference against the ")
+                .append("gyro-averaged full-orbit reference, worst case over the gyrophase ensemble) exceeds the ")
+                .append("default tolerance; below it, and below the energy beside it, guiding centers are safe for ")
+                .append("that metric. `not-reached`: safe over the whole range scanned; `exceeded-at-start`: not safe ")
+                .append("even at the smallest eps scanned; `no-data`: the metric does not apply (no bounce, no drift). ")
+                .append("Tolerances: mu_jump 1 %, drift_error 5 %, position_error_rho 1 rho0, ")
+                .append("bounce_period_error 1 %, class_change 0 (any orbit trapped in one model and lost in the other).\n\n");
+        sb.append("| field | species | metric | eps | pitch (deg) | range scanned | outcome | eps* | energy at eps* (eV) |\n");
+        sb.append("|---|---|---|---|---|---|---|---|---|\n");
+        for (Row row : r.rows()) {
+            Threshold t = row.threshold();
+            boolean crossed = t.outcome() == ThresholdOutcome.CROSSED;
+            sb.append("| ").append(row.field()).append(" | ").append(row.species()).append(" | ")
+                    .append(t.metric().key()).append(" | ").append(row.epsMeaning()).append(" | ")
+                    .append(Format.number(row.pitchDeg())).append(" | ").append(Format.number(row.epsMin()))
+                    .append(" – ").append(Format.number(row.epsMax())).append(" | ").append(t.outcome().label())
+                    .append(" | ").append(crossed ? Format.number(t.epsStar()) : "—").append(" | ")
+                    .append(crossed && !Double.isNaN(t.energyEvStar()) ? Format.number(t.energyEvStar()) : "—")
+                    .append(" |\n");
+        }
+        if (!r.skipped().isEmpty()) {
+            sb.append("\nNot scanned:\n\n");
+            r.skipped().forEach((f, why) -> sb.append("- ").append(f).append(": ").append(why).append('\n'));
+        }
+        return sb.toString();
+    }
+
+    static String csv(Result r) {
+        StringBuilder sb = new StringBuilder(
+                "field,species,metric,tolerance,eps_meaning,pitch_deg,eps_min,eps_max,outcome,eps_star,energy_ev_star\n");
+        for (Row row : r.rows()) {
+            Threshold t = row.threshold();
+            sb.append(String.join(",", row.field(), row.species(), t.metric().key(), Double.toString(t.tolerance()),
+                    row.epsMeaning(), Double.toString(row.pitchDeg()), Double.toString(row.epsMin()),
+                    Double.toString(row.epsMax()), t.outcome().label(), cell(t.epsStar()), cell(t.energyEvStar())))
+                    .append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static String cell(double v) {
+        return Double.isNaN(v) ? "" : Double.toString(v);
+    }
+
+    /**
+     * JSON: {@code rows}, one per field, species and metric with {@code field}, {@code species},
+     * {@code metric}, {@code tolerance}, {@code eps_meaning}, {@code pitch_deg}, {@code eps_min},
+     * {@code eps_max}, {@code outcome}, {@code eps_star}, {@code energy_ev_star} (null unless
+     * crossed); {@code not_scanned}: field -> reason.
+     */
+    static String json(Result r) {
+        List<Object> rows = new ArrayList<>();
+        for (Row row : r.rows()) {
+            Threshold t = row.threshold();
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("field", row.field());
+            m.put("species", row.species());
+            m.put("metric", t.metric().key());
+            m.put("tolerance", t.tolerance());
+            m.put("eps_meaning", row.epsMeaning());
+            m.put("pitch_deg", row.pitchDeg());
+            m.put("eps_min", row.epsMin());
+            m.put("eps_max", row.epsMax());
+            m.put("outcome", t.outcome().label());
+            m.put("eps_star", ScanJson.number(t.epsStar()));
+            m.put("energy_ev_star", ScanJson.number(t.energyEvStar()));
+            rows.add(m);
+        }
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("rows", rows);
+        root.put("not_scanned", r.skipped());
+        return ScanJson.write(root);
+    }
+
+    /** One panel per species: ε* by field, one series per metric; outcomes without ε* are not drawn. */
+    static void plot(Result r, Path file) {
+        System.setProperty("java.awt.headless", "true");
+        List<CategoryChart> charts = new ArrayList<>();
+        List<String> fields = r.rows().stream().map(Row::field).distinct().toList();
+        for (Species s : SPECIES) {
+            CategoryChart c = new CategoryChartBuilder().width(900).height(520)
+                    .title("eps* of the guiding-center model, " + s.name() + "s (energies in safe-use.md)")
+                    .xAxisTitle("field").yAxisTitle("eps* at the default tolerance").build();
+            c.getStyler().setDefaultSeriesRenderStyle(CategorySeries.CategorySeriesRenderStyle.Scatter);
+            c.getStyler().setYAxisLogarithmic(true).setLegendPosition(Styler.LegendPosition.OutsideE);
+            boolean any = false;
+            for (ScanMetric m : ScanMetric.values()) {
+                List<Double> ys = new ArrayList<>();
+                boolean some = false;
+                for (String f : fields) {
+                    Double y = r.rows().stream().filter(row -> row.field().equals(f)
+                                    && row.species().equals(s.name()) && row.threshold().metric() == m
+                                    && row.threshold().outcome() == ThresholdOutcome.CROSSED)
+                            .map(row -> row.threshold().epsStar()).findFirst().orElse(null);
+                    ys.add(y);
+                    some |= y != null;
+                }
+                if (some) {
+                    c.addSeries(m.key(), fields, ys);
+                    any = true;
+                }
+            }
+            if (any) {
+                charts.add(c);
+            }
+        }
+        if (charts.isEmpty()) {
+            return;
+        }
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            BitmapEncoder.saveBitmap(charts, charts.size(), 1, bytes, BitmapEncoder.BitmapFormat.PNG);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        AtomicFiles.write(file, bytes.toByteArray());
+    }
+
+    private static void deleteTree(Path dir) {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (Stream<Path> walk = Files.walk(dir)) {
+            for (Path p : walk.sorted(Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot remove " + dir + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** Folds the progress of the successive scans into one count over the whole map. */
+    private static final class Overall implements ScanProgress {
+        private final ScanProgress target;
+        private final int total;
+        private boolean started;
+
+        Overall(ScanProgress target, int total) {
+            this.target = target;
+            this.total = total;
+        }
+
+        @Override
+        public synchronized void start(int scanTotal, int alreadyDone) {
+            if (!started) {
+                target.start(total, 0);
+                started = true;
+            }
+            for (int i = 0; i < alreadyDone; i++) {
+                target.pointDone();
+            }
+        }
+
+        @Override
+        public void pointDone() {
+            target.pointDone();
+        }
+    }
+}

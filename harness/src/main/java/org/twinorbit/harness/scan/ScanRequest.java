@@ -1,0 +1,166 @@
+package org.twinorbit.harness.scan;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.twinorbit.fields.Field;
+import org.twinorbit.fields.Fields;
+import org.twinorbit.harness.cases.CaseSpec;
+import org.twinorbit.shared.Species;
+import org.twinorbit.shared.Vec3;
+
+/**
+ * What a user asks of a breakdown scan, every entry optional (null takes the field's recipe,
+ * {@link ScanField}); {@link #build} checks it and turns it into a scan and the evaluator of its
+ * points. Error messages name the command-line option.
+ */
+public final class ScanRequest {
+
+    public String field;
+    public Map<String, Double> parameters = new LinkedHashMap<>();
+    public Species species = Species.PROTON;
+    public List<Double> pitches;
+    public Double epsMin;
+    public Double epsMax;
+    public int points = 16;
+    public Double energyEv;
+    public List<Double> start;
+    public int phases = 8;
+    public Double duration;
+    public ScanDuration.Unit durationUnit;
+    /** Tolerances by metric; metrics not named keep their default. */
+    public Map<ScanMetric, List<Double>> tolerances = new LinkedHashMap<>();
+    public double referenceRtol = CaseSpec.DEFAULT_RTOL;
+
+    /** A scan and the evaluator of its points. */
+    public record Built(BreakdownScan scan, PointEvaluator evaluator) {}
+
+    /**
+     * @throws IllegalArgumentException naming the option and the allowed values; no orbit is
+     *         computed before every option has been checked
+     */
+    public Built build() {
+        if (field == null) {
+            throw new IllegalArgumentException("--field: name a field of the library (see 'twinorbit fields')");
+        }
+        ScanField recipe = ScanField.of(field);
+        if (recipe.timeScale() && parameters.containsKey(recipe.parameter())) {
+            throw new IllegalArgumentException("--param " + recipe.parameter() + ": the scan sets it from eps; "
+                    + "choose the range with --eps-min and --eps-max instead");
+        }
+        double lo = epsMin != null ? epsMin : recipe.epsMin();
+        double hi = epsMax != null ? epsMax : recipe.epsMax();
+        double[] eps = EpsilonGrid.logSpaced(lo, hi, points);
+        Field f = Fields.create(field, recipe.parametersAt(parameters, lo), species);
+        Vec3 x0 = start(f, recipe);
+        List<Double> pitch = pitches != null ? List.copyOf(pitches) : List.of(recipe.pitchDeg());
+        if (pitch.isEmpty()) {
+            throw new IllegalArgumentException("--pitch: give at least one pitch angle in [0, 180] degrees");
+        }
+        for (double p : pitch) {
+            if (!(p >= 0 && p <= 180)) {
+                throw new IllegalArgumentException("--pitch must lie in [0, 180] degrees, got " + p);
+            }
+        }
+        if (phases < 1 || phases > 1024) {
+            throw new IllegalArgumentException("--phases must lie in [1, 1024], got " + phases);
+        }
+        ScanDuration d = new ScanDuration(duration != null ? duration : recipe.duration().value(),
+                durationUnit != null ? durationUnit : recipe.duration().unit());
+        if (d.unit() == ScanDuration.Unit.FIELD_PERIODS && !recipe.timeScale()) {
+            throw new IllegalArgumentException("--duration-unit field-periods needs a time-dependent field (ramp, wave); "
+                    + "field '" + field + "' is static: use gyroperiods or bounces");
+        }
+        if (!(referenceRtol >= 1e-13 && referenceRtol <= 1e-6)) {
+            throw new IllegalArgumentException("--reference-rtol must lie in [1e-13, 1e-6], got " + referenceRtol);
+        }
+        ScanAxis axis = axis(f, recipe, x0, hi);
+        Map<String, Object> settings = new LinkedHashMap<>();
+        settings.put("field", field);
+        settings.put("parameters", new LinkedHashMap<>(parameters));
+        settings.put("species", species.name());
+        settings.put("start_m", List.of(x0.x(), x0.y(), x0.z()));
+        settings.put("eps_meaning", axis.meaning());
+        if (recipe.timeScale()) {
+            settings.put("energy_ev", axis.energyEv().applyAsDouble(lo));
+            settings.put("scanned_parameter", recipe.parameter());
+        } else {
+            settings.put("L_m", f.length());
+        }
+        settings.put("eps_min", lo);
+        settings.put("eps_max", hi);
+        settings.put("n_eps", points);
+        settings.put("pitch_deg", pitch);
+        settings.put("phases", phases);
+        settings.put("duration", d.value());
+        settings.put("duration_unit", d.unit().label());
+        settings.put("reference_rtol", referenceRtol);
+        ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
+                referenceRtol);
+        return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances()), ev);
+    }
+
+    private ScanAxis axis(Field f, ScanField recipe, Vec3 x0, double hi) {
+        if (recipe.timeScale()) {
+            double w = energyEv != null ? energyEv : recipe.energyEv();
+            if (!(w > 0 && Double.isFinite(w))) {
+                throw new IllegalArgumentException("--energy must be a finite number > 0 eV, got " + w);
+            }
+            if (field.equals("wave") && hi >= 0.999) {
+                throw new IllegalArgumentException("--eps-max must stay below 0.999 for the wave "
+                        + "(cyclotron resonance at omega/Omega = 1), got " + hi);
+            }
+            return ScanAxis.timeScale(recipe.meaning(field), w);
+        }
+        if (energyEv != null) {
+            throw new IllegalArgumentException("--energy applies to ramp and wave only: field '" + field
+                    + "' scans eps through the energy");
+        }
+        if (!f.isStatic()) {
+            throw new IllegalArgumentException("--field: '" + field + "' depends on time but has no scan recipe;"
+                    + " time-dependent fields that can be scanned: ramp, wave");
+        }
+        EnergyScale scale = new EnergyScale(f, species, x0);
+        return field.equals("current-sheet") ? ScanAxis.currentSheet(scale) : ScanAxis.energy(scale);
+    }
+
+    private Vec3 start(Field f, ScanField recipe) {
+        if (start == null) {
+            return recipe.start(field, f);
+        }
+        if (start.size() != 3 || start.stream().anyMatch(v -> v == null || !Double.isFinite(v))) {
+            throw new IllegalArgumentException("--start needs three finite coordinates x,y,z in m, got " + start);
+        }
+        Vec3 x0 = new Vec3(start.get(0), start.get(1), start.get(2));
+        if (!f.inDomain(x0.x(), x0.y(), x0.z())) {
+            throw new IllegalArgumentException("--start " + x0 + " lies outside the domain of field '" + field
+                    + "': " + f.domainMeaning());
+        }
+        return x0;
+    }
+
+    /** Every thresholded metric at its default tolerance, replaced where {@link #tolerances} names it. */
+    private Map<ScanMetric, List<Double>> tolerances() {
+        Map<ScanMetric, List<Double>> tol = new LinkedHashMap<>();
+        for (ScanMetric m : ScanMetric.values()) {
+            if (m.thresholded()) {
+                tol.put(m, List.of(m.defaultTolerance()));
+            }
+        }
+        for (Map.Entry<ScanMetric, List<Double>> e : tolerances.entrySet()) {
+            if (!e.getKey().thresholded()) {
+                throw new IllegalArgumentException("--tolerance: " + e.getKey().key() + " is reported beside mu_jump "
+                        + "and has no threshold; give mu_jump instead");
+            }
+            for (double x : e.getValue()) {
+                if (!(x >= 0 && Double.isFinite(x))) {
+                    throw new IllegalArgumentException("--tolerance " + e.getKey().key()
+                            + " must be a finite number >= 0, got " + x);
+                }
+            }
+            tol.put(e.getKey(), new ArrayList<>(e.getValue()));
+        }
+        return tol;
+    }
+}
