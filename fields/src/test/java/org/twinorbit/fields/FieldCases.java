@@ -130,7 +130,7 @@ final class FieldCases {
         p.add(new double[] {0, 0, r0 + 1e-6, 1e-6});           // next to it
         p.add(new double[] {0, r0 + 0.999 * a, 0, 0});         // at the wall, outboard
         p.add(new double[] {0, -(r0 - 0.999 * a), 0, 0});      // inboard
-        p.add(new double[] {0, 0.3, r0, 0.999 * a});           // top
+        p.add(new double[] {0, 0, r0, 0.999 * a});             // top
         return new Case("tokamak", make("tokamak"), p, q -> a);
     }
 
