@@ -9,9 +9,9 @@ import org.twinorbit.shared.Vec3;
  * A field that only the test class path knows, registered through
  * META-INF/services in the test resources, to show that users can add fields.
  */
-public final class TestOffsetField {
+public final class TestAlongXField {
 
-    private TestOffsetField() {}
+    private TestAlongXField() {}
 
     /** The provider the ServiceLoader finds: a uniform field along x. */
     public static final class Provider implements FieldProvider {
