@@ -43,11 +43,8 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
 
         /** 1/γ at which Higuera & Cary rotate, from u⁻ (the current u) and τ = h B. */
         private double rotationInverseGamma(double tx, double ty, double tz) {
-            double tau2 = tx * tx + ty * ty + tz * tz;
-            double uDotTau = ux * tx + uy * ty + uz * tz;
-            double sigma = 1.0 + (ux * ux + uy * uy + uz * uz) * INV_C2 - tau2;
-            double g2 = 0.5 * (sigma + Math.sqrt(sigma * sigma + 4.0 * (tau2 + uDotTau * uDotTau * INV_C2)));
-            return 1.0 / Math.sqrt(g2);
+            return implicitInverseGamma(ux * ux + uy * uy + uz * uz, ux * tx + uy * ty + uz * tz,
+                    tx * tx + ty * ty + tz * tz);
         }
 
         private void kick(FieldSample f, double h) {

@@ -56,6 +56,24 @@ abstract class LeapfrogUpdate {
         push(f, -0.5 * h);
     }
 
+    /**
+     * 1/γ of the implicit rotation of Vay (2008) and Higuera &amp; Cary (2017): γ² is the positive
+     * root of γ⁴ − σγ² − (τ² + u*²) = 0 with σ = 1 + u²/c² − τ², u* = u·τ/c. When σ &lt; 0
+     * (Ω Δt ≳ 2γ) the textbook form (σ + sqrt(σ² + 4(τ² + u*²)))/2 cancels, so the same root is
+     * taken as 2(τ² + u*²)/(sqrt(…) − σ) there (common practice for quadratic roots).
+     *
+     * @param u2      |u|² (m²/s²) of the vector being rotated
+     * @param uDotTau u·τ (m/s) with τ = h B
+     * @param tau2    |τ|²
+     */
+    static double implicitInverseGamma(double u2, double uDotTau, double tau2) {
+        double sigma = 1.0 + u2 * INV_C2 - tau2;
+        double q = tau2 + uDotTau * uDotTau * INV_C2;
+        double root = Math.sqrt(sigma * sigma + 4.0 * q);
+        double g2 = sigma >= 0 ? 0.5 * (sigma + root) : 2.0 * q / (root - sigma);
+        return 1.0 / Math.sqrt(g2);
+    }
+
     /** 1/γ of the current u. */
     final double inverseGamma() {
         return 1.0 / Math.sqrt(1.0 + (ux * ux + uy * uy + uz * uz) * INV_C2);

@@ -56,9 +56,7 @@ public final class VayPusher extends LeapfrogPusher {
             }
             double tau2 = tx * tx + ty * ty + tz * tz;
             double uDotTau = px * tx + py * ty + pz * tz;
-            double sigma = 1.0 + (px * px + py * py + pz * pz) * INV_C2 - tau2;
-            double g2 = 0.5 * (sigma + Math.sqrt(sigma * sigma + 4.0 * (tau2 + uDotTau * uDotTau * INV_C2)));
-            double igNew = 1.0 / Math.sqrt(g2);
+            double igNew = implicitInverseGamma(px * px + py * py + pz * pz, uDotTau, tau2);
             tx *= igNew;
             ty *= igNew;
             tz *= igNew;
