@@ -35,7 +35,12 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
     static final class Update extends LeapfrogUpdate {
 
         Update(boolean electric) {
-            super(electric);
+            super(electric, false);
+        }
+
+        @Override
+        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+            return 1.0;
         }
 
         @Override
@@ -52,26 +57,6 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
                 uz += h * f.ez;
             }
             return 1.0;
-        }
-
-        @Override
-        void firstHalf(FieldSample f, double h) {
-            if (electric) {
-                ux += h * f.ex;
-                uy += h * f.ey;
-                uz += h * f.ez;
-            }
-            rotateHalf(h * f.bx, h * f.by, h * f.bz, 1);
-        }
-
-        @Override
-        void undoFirstHalf(FieldSample f, double h) {
-            rotateHalf(h * f.bx, h * f.by, h * f.bz, -1);
-            if (electric) {
-                ux -= h * f.ex;
-                uy -= h * f.ey;
-                uz -= h * f.ez;
-            }
         }
     }
 }

@@ -9,9 +9,7 @@ import org.twinorbit.shared.FieldSample;
  * Conf. Numerical Simulation of Plasmas, 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics
  * via Computer Simulation, 1991, §4-4 and §15-4). Volume-preserving (H. Qin et al., Phys.
  * Plasmas 20, 084503, 2013) and time-reversible.
- *
- * <p>It splits exactly into two halves, half kick + half rotation and half rotation + half kick,
- * which is how the velocity is synchronised to the position.
+
  */
 public final class BorisPusher extends LeapfrogPusher {
 
@@ -38,7 +36,13 @@ public final class BorisPusher extends LeapfrogPusher {
     static final class Update extends LeapfrogUpdate {
 
         Update(boolean electric) {
-            super(electric);
+            super(electric, true);
+        }
+
+        /** Boris rotates at the γ of u⁻, which the rotation leaves unchanged. */
+        @Override
+        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+            return 1.0 / Math.sqrt(1.0 + u2 * INV_C2);
         }
 
         @Override
@@ -56,29 +60,6 @@ public final class BorisPusher extends LeapfrogPusher {
                 uz += h * f.ez;
             }
             return inverseGamma();
-        }
-
-        @Override
-        void firstHalf(FieldSample f, double h) {
-            if (electric) {
-                ux += h * f.ex;
-                uy += h * f.ey;
-                uz += h * f.ez;
-            }
-            double k = h * inverseGamma();
-            rotateHalf(k * f.bx, k * f.by, k * f.bz, 1);
-        }
-
-        @Override
-        void undoFirstHalf(FieldSample f, double h) {
-            // the rotation keeps |u|, so γ before and after it is the same
-            double k = h * inverseGamma();
-            rotateHalf(k * f.bx, k * f.by, k * f.bz, -1);
-            if (electric) {
-                ux -= h * f.ex;
-                uy -= h * f.ey;
-                uz -= h * f.ez;
-            }
         }
     }
 }

@@ -23,9 +23,12 @@ abstract class LeapfrogUpdate {
 
     /** False when the field has no E anywhere: every kick is skipped. */
     final boolean electric;
+    /** False for a scheme that sets γ = 1 (then u = v). */
+    final boolean relativistic;
 
-    LeapfrogUpdate(boolean electric) {
+    LeapfrogUpdate(boolean electric, boolean relativistic) {
         this.electric = electric;
+        this.relativistic = relativistic;
     }
 
     /**
@@ -37,23 +40,108 @@ abstract class LeapfrogUpdate {
     abstract double push(FieldSample f, double h);
 
     /**
-     * Advances u by the first half of {@link #push} (from t − Δt/2 to t): used to synchronise
-     * the velocity with the position. The default runs the scheme itself over Δt/2; a scheme
-     * that factors into two exact halves overrides it with its first half.
+     * 1/γ at which the scheme rotates a vector u in the magnetic field, from quantities a
+     * rotation about B leaves unchanged.
+     *
+     * @param u2      |u|² (m²/s²)
+     * @param uDotTau u·τ (m/s), τ = h B
+     * @param tau2    |τ|²
+     */
+    abstract double rotationInverseGamma(double u2, double uDotTau, double tau2);
+
+    /**
+     * Advances u from t − Δt/2 to t, synchronising it with the position: half the scheme's
+     * rotation in the frame drifting at E×B/B², plus half the kick of E along B. In uniform
+     * fields this is exactly half a step of the scheme (applied twice it gives {@link #push};
+     * Boris non-relativistically, and any scheme for a particle at rest in the drift frame); in
+     * a pure magnetic field it is the half rotation. Where E⊥ ≥ cB there is no drift frame and
+     * it falls back to half kick + half rotation. Rotating in the drift frame keeps the drift
+     * velocity exact; rotating u + hE instead would lengthen it by sqrt(1 + (Ω Δt/2)²).
      *
      * @param h q Δt / (2m) (s C/kg) of the full step
      */
-    void firstHalf(FieldSample f, double h) {
-        push(f, 0.5 * h);
+    final void firstHalf(FieldSample f, double h) {
+        halfStep(f, h, 1);
     }
 
     /**
-     * The inverse of {@link #firstHalf}: takes u at t back to t − Δt/2, the leapfrog start.
+     * The exact inverse of {@link #firstHalf}: takes u at t back to t − Δt/2, the leapfrog start.
      *
      * @param h q Δt / (2m) (s C/kg) of the full step
      */
-    void undoFirstHalf(FieldSample f, double h) {
-        push(f, -0.5 * h);
+    final void undoFirstHalf(FieldSample f, double h) {
+        halfStep(f, h, -1);
+    }
+
+    private void halfStep(FieldSample f, double h, int sign) {
+        double bx = f.bx, by = f.by, bz = f.bz;
+        double b2 = bx * bx + by * by + bz * bz;
+        double dx = 0, dy = 0, dz = 0; // u of the drift frame (m/s)
+        double kx = 0, ky = 0, kz = 0; // half kick (m/s)
+        if (electric) {
+            if (b2 > 0) {
+                double ex = f.ex, ey = f.ey, ez = f.ez;
+                double vx = (ey * bz - ez * by) / b2, vy = (ez * bx - ex * bz) / b2, vz = (ex * by - ey * bx) / b2;
+                double v2 = vx * vx + vy * vy + vz * vz;
+                double par = (ex * bx + ey * by + ez * bz) / b2;
+                double g = relativistic ? 1.0 - v2 * INV_C2 : 1.0;
+                if (g > 0) {
+                    g = 1.0 / Math.sqrt(g);
+                    dx = g * vx;
+                    dy = g * vy;
+                    dz = g * vz;
+                    kx = h * par * bx;
+                    ky = h * par * by;
+                    kz = h * par * bz;
+                } else {
+                    kx = h * ex;
+                    ky = h * ey;
+                    kz = h * ez;
+                }
+            } else {
+                kx = h * f.ex;
+                ky = h * f.ey;
+                kz = h * f.ez;
+            }
+        }
+        if (sign < 0) {
+            ux -= kx;
+            uy -= ky;
+            uz -= kz;
+        }
+        ux -= dx;
+        uy -= dy;
+        uz -= dz;
+        double tx = h * bx, ty = h * by, tz = h * bz;
+        double ig = rotationInverseGamma(ux * ux + uy * uy + uz * uz + dx * dx + dy * dy + dz * dz,
+                ux * tx + uy * ty + uz * tz, tx * tx + ty * ty + tz * tz);
+        rotateHalf(ig * tx, ig * ty, ig * tz, sign);
+        ux += dx;
+        uy += dy;
+        uz += dz;
+        if (sign > 0) {
+            ux += kx;
+            uy += ky;
+            uz += kz;
+        }
+    }
+
+    /**
+     * 1/γ of the implicit rotation of Vay (2008) and Higuera &amp; Cary (2017): γ² is the positive
+     * root of γ⁴ − σγ² − (τ² + u*²) = 0 with σ = 1 + u²/c² − τ², u* = u·τ/c. When σ &lt; 0
+     * (Ω Δt ≳ 2γ) the textbook form (σ + sqrt(σ² + 4(τ² + u*²)))/2 cancels, so the same root is
+     * taken as 2(τ² + u*²)/(sqrt(…) − σ) there (common practice for quadratic roots).
+     *
+     * @param u2      |u|² (m²/s²) of the vector being rotated
+     * @param uDotTau u·τ (m/s) with τ = h B
+     * @param tau2    |τ|²
+     */
+    static double implicitInverseGamma(double u2, double uDotTau, double tau2) {
+        double sigma = 1.0 + u2 * INV_C2 - tau2;
+        double q = tau2 + uDotTau * uDotTau * INV_C2;
+        double root = Math.sqrt(sigma * sigma + 4.0 * q);
+        double g2 = sigma >= 0 ? 0.5 * (sigma + root) : 2.0 * q / (root - sigma);
+        return 1.0 / Math.sqrt(g2);
     }
 
     /** 1/γ of the current u. */
