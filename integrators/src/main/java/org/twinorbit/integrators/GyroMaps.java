@@ -19,8 +19,9 @@ import org.twinorbit.shared.Vec3;
  *
  * <p><b>E×B frame.</b> With E, u⊥ is taken in the frame moving with v_E = E×B/|B|²: u is
  * Lorentz-boosted by −v_E before it is split (and by +v_E when a particle is placed). The
- * boost of u is exact; the gyroradius uses the laboratory |B| and ignores the Lorentz
- * contraction of the ring along v_E, an error of relative order v_E²/c² in ρ.
+ * boost of u is exact; the position is not Lorentz-transformed: the gyroradius uses the
+ * laboratory |B|, and the drift-frame ring is placed at equal laboratory time (ignoring its
+ * contraction along v_E and the relativity of simultaneity), errors of order (v_E v/c²) ρ.
  *
  * <p><b>Gyrophase convention.</b> e1 is the part of x̂ perpendicular to b, normalised (ŷ instead
  * when |b_x| &gt; 0.9), and e2 = b × e1. The gyrophase θ is defined by the direction of the
