@@ -130,13 +130,17 @@ public final class GuidingCenterReference {
             dp.addStepHandler(new StepNormalizer(sampleInterval, sampler, StepNormalizerMode.MULTIPLES,
                     StepNormalizerBounds.BOTH));
         }
+        // switching functions are made dimensionless: the root solver also stops once |g| falls
+        // below 1e-15, which raw values in kg m/s or T would do at once
+        double pScale = atol[3] / rtol;
+        double lengthScale = atol[0] / rtol;
         double maxCheck = span / 1000;
         double convergence = Math.max(1e-15 * Math.abs(tEnd), 1e-13 * span);
         int maxIterations = 200;
         FieldSample mirrorSample = new FieldSample();
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
-                return s[3];
+                return s[3] / pScale;
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 field.evaluate(t, s[0], s[1], s[2], mirrorSample);
@@ -147,7 +151,7 @@ public final class GuidingCenterReference {
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
                 double margin = field.domainMargin(s[0], s[1], s[2]);
-                return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, margin));
+                return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, margin / lengthScale));
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 if (increasing) {
@@ -159,7 +163,7 @@ public final class GuidingCenterReference {
         }, maxCheck, convergence, maxIterations);
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
-                return eq.parallelBStar(t, s);
+                return eq.parallelBStarRatio(t, s);
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 if (increasing) {
