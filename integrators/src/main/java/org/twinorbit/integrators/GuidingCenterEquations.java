@@ -127,6 +127,16 @@ public final class GuidingCenterEquations {
         return bMag + k * (sample.bx * curl[0] + sample.by * curl[1] + sample.bz * curl[2]) / bMag;
     }
 
+    /** B*∥/|B| (dimensionless) at time t (s) and state y; ≤ 0 where the model fails. */
+    public double parallelBStarRatio(double t, double[] y) {
+        field.evaluate(t, y[0], y[1], y[2], sample);
+        evaluations++;
+        double bMag = sample.bMag();
+        sample.curlUnitB(curl);
+        double k = y[3] / q;
+        return 1.0 + k * (sample.bx * curl[0] + sample.by * curl[1] + sample.bz * curl[2]) / (bMag * bMag);
+    }
+
     /** Lorentz factor γ of the guiding center at time t (s) and state y. */
     public double gamma(double t, double[] y) {
         field.evaluate(t, y[0], y[1], y[2], sample);

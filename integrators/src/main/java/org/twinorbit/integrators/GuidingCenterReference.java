@@ -2,6 +2,7 @@ package org.twinorbit.integrators;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.events.EventHandler;
@@ -130,13 +131,17 @@ public final class GuidingCenterReference {
             dp.addStepHandler(new StepNormalizer(sampleInterval, sampler, StepNormalizerMode.MULTIPLES,
                     StepNormalizerBounds.BOTH));
         }
+        // switching functions are made dimensionless: the root solver also stops once |g| falls
+        // below 1e-15, which raw values in kg m/s or T would do at once
+        double pScale = atol[3] / rtol;
+        double lengthScale = atol[0] / rtol;
         double maxCheck = span / 1000;
         double convergence = Math.max(1e-15 * Math.abs(tEnd), 1e-13 * span);
         int maxIterations = 200;
         FieldSample mirrorSample = new FieldSample();
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
-                return s[3];
+                return s[3] / pScale;
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 field.evaluate(t, s[0], s[1], s[2], mirrorSample);
@@ -147,7 +152,7 @@ public final class GuidingCenterReference {
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
                 double margin = field.domainMargin(s[0], s[1], s[2]);
-                return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, margin));
+                return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, margin / lengthScale));
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 if (increasing) {
@@ -159,7 +164,7 @@ public final class GuidingCenterReference {
         }, maxCheck, convergence, maxIterations);
         dp.addEventHandler(new Detector() {
             @Override public double g(double t, double[] s) {
-                return eq.parallelBStar(t, s);
+                return eq.parallelBStarRatio(t, s);
             }
             @Override public Action eventOccurred(double t, double[] s, boolean increasing) {
                 if (increasing) {
@@ -180,8 +185,9 @@ public final class GuidingCenterReference {
         double tStop;
         try {
             tStop = dp.integrate(ode, t0, y, tEnd, end);
-        } catch (MathIllegalStateException e) {
-            // step size underflow or too many evaluations: a singularity the events did not catch
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            // step size underflow, too many evaluations or an unbracketed event: a singularity
+            // the events did not catch
             boolean failed = !(eq.parallelBStar(lastT[0], last) > 0.0);
             return result(failed ? OrbitStatus.MODEL_FAILURE : OrbitStatus.UNSTABLE, lastT[0], last,
                     evalsAtStart, mirrors);
