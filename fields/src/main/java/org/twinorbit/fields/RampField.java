@@ -10,7 +10,9 @@ import org.twinorbit.shared.Vec3;
  * A uniform field that grows linearly in time, B = B0 (1 + t/τ) ẑ, with the induced electric
  * field E = (B0/(2τ)) (y, −x, 0) that Faraday's law ∇×E = −∂B/∂t requires (the solution
  * symmetric about the z axis). E has no scalar potential: E = −∂A/∂t with
- * A = (B(t)/2)(−y, x, 0). The only invariant is μ, adiabatically for τ ≫ T_c.
+ * A = (B(t)/2)(−y, x, 0). Energy is not conserved; μ is, adiabatically for τ ≫ T_c. Because
+ * neither field depends on z or on the angle about the z axis, p_z = m u_z and the canonical
+ * angular momentum m R u_φ + q B(t) R²/2 are exact invariants.
  */
 public final class RampField implements Field {
 
@@ -25,9 +27,12 @@ public final class RampField implements Field {
     public RampField(double b0, double tau) {
         this.b0 = b0;
         this.tau = tau;
-        this.invariants = List.of(Invariants.of("mu",
-                "m u_perp^2/(2 B(t)), u_perp relative to the E x B frame (adiabatic)", "J/T", false,
-                this::mu, this::mu));
+        this.invariants = List.of(
+                Invariants.of("mu", "m u_perp^2/(2 B(t)), u_perp relative to the E x B frame (adiabatic)",
+                        "J/T", false, this::mu, this::mu),
+                Invariants.canonicalAngular(this, "p_phi", "m R u_phi + q B(t) R^2/2"),
+                Invariants.of("p_z", "m u_z", "kg m/s", true,
+                        (s, t, x, u) -> s.mass() * u[2], Invariants::momentumScale));
     }
 
     @Override public String name() { return "ramp"; }
@@ -95,7 +100,8 @@ public final class RampField implements Field {
         }
         @Override public String lengthMeaning() { return "none; time scale tau"; }
         @Override public String invariantsMeaning() {
-            return "mu = m u_perp^2/(2B) adiabatically (u_perp in the E x B frame): W_perp grows as B; no exact invariant";
+            return "mu = m u_perp^2/(2B) adiabatically (u_perp in the E x B frame): W_perp grows as B; "
+                    + "exact: p_phi = m R u_phi + q B(t) R^2/2 and p_z = m u_z (axial symmetry); energy is not conserved";
         }
         @Override public Field create(FieldParameters p, Species species) {
             if (species == null) {
