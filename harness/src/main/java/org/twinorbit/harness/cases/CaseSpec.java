@@ -92,7 +92,12 @@ public final class CaseSpec {
      */
     public Case toCase(List<String> allPushers, List<String> allGc) {
         String f = field != null ? field : "uniform";
-        Species s = Species.parse(species != null ? species : "proton");
+        Species s;
+        try {
+            s = Species.parse(species != null ? species : "proton");
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("species: " + e.getMessage(), e);
+        }
         Vec3 x0 = null;
         if (start != null) {
             if (start.size() != 3 || start.stream().anyMatch(v -> v == null || !Double.isFinite(v))) {

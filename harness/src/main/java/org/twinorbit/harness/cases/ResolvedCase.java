@@ -3,7 +3,7 @@ package org.twinorbit.harness.cases;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.shared.FieldSample;
-import org.twinorbit.shared.Gyration;
+import org.twinorbit.integrators.InitialCondition;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
@@ -26,12 +26,22 @@ public final class ResolvedCase {
     private final double rho0;
     private final double eps;
     private final double gyroPeriod;
+    private final InitialCondition initial;
 
     /** @throws IllegalArgumentException naming the option and the allowed values */
     public ResolvedCase(Case c) {
         this.spec = c;
         Species s = c.species();
-        this.field = Fields.create(c.field(), c.fieldParameters(), s);
+        try {
+            Fields.provider(c.field());
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("field: " + e.getMessage(), e);
+        }
+        try {
+            this.field = Fields.create(c.field(), c.fieldParameters(), s);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("field-param: " + e.getMessage(), e);
+        }
         this.start = c.start() != null ? c.start() : field.defaultStart();
         if (!field.inDomain(start.x(), start.y(), start.z())) {
             throw new IllegalArgumentException("start: the guiding center (" + start.x() + ", " + start.y()
@@ -56,12 +66,16 @@ public final class ResolvedCase {
         } else {
             this.energyEv = c.energyEv();
         }
-        this.gamma = Relativity.gammaFromKinetic(s, energyEv);
-        this.momentum = Relativity.momentumFromKinetic(s, energyEv);
-        this.rho0 = momentum / (Math.abs(s.charge()) * b0);
+        this.initial = InitialCondition.ofEnergy(field, s, energyEv, c.pitchDeg(), start);
+        this.gamma = initial.gamma();
+        this.momentum = initial.momentum();
+        this.rho0 = initial.gyroradius();
         this.eps = Double.isFinite(length) ? rho0 / length : 0.0;
-        this.gyroPeriod = Gyration.period(s, b0, gamma);
+        this.gyroPeriod = initial.gyroperiod();
     }
+
+    /** The initial condition: guiding-center state and gyrophase ensemble. */
+    public InitialCondition initial() { return initial; }
 
     public Case spec() { return spec; }
     public Field field() { return field; }

@@ -109,6 +109,6 @@ public final class Orbits {
             rec.observe(st.time(), x, st.parallelMomentum());
         }
         Outcome o = new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0);
-        return new GuidingCenterRecord(o, rec, x.clone(), st.time());
+        return new GuidingCenterRecord(o, rec, x.clone(), st.time(), java.util.List.of());
     }
 }

@@ -1,0 +1,193 @@
+package org.twinorbit.harness.report;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Map;
+import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.twinorbit.harness.run.CaseResult;
+import org.twinorbit.harness.run.ResultRow;
+import org.twinorbit.harness.metrics.Track;
+
+/**
+ * PNG plots of a case (XChart): μ change and energy error against time per integrator, the
+ * guiding-center orbit overlay (gyro-averaged full-orbit reference against the guiding-center
+ * reference) in a projection chosen per field, and the convergence of every integrator on a
+ * log-log scale with its measured order.
+ */
+public final class Plots {
+
+    private static final int WIDTH = 900;
+    private static final int HEIGHT = 560;
+    /** Magnitudes below this are drawn at it on log axes (round-off of a double). */
+    private static final double LOG_FLOOR = 1e-17;
+
+    /**
+     * The projection of the orbit overlay per field: the plane where the guiding-center motion
+     * that distinguishes the models shows (the drift, the bounce, the banana).
+     */
+    private static final Map<String, String> PROJECTION = Map.ofEntries(
+            Map.entry("uniform", "x-y"), Map.entry("crossed", "t-y"), Map.entry("gradient", "t-y"),
+            Map.entry("toroidal", "t-z"), Map.entry("mirror", "t-z"), Map.entry("dipole", "t-z"),
+            Map.entry("tokamak", "R-z"), Map.entry("current-sheet", "t-z"), Map.entry("shear", "y-z"),
+            Map.entry("ramp", "x-y"), Map.entry("wave", "t-y"));
+
+    static {
+        // render off-screen, and encode PNGs in memory: ImageIO's default disk cache only slows it down
+        System.setProperty("java.awt.headless", "true");
+        javax.imageio.ImageIO.setUseCache(false);
+    }
+
+    private Plots() {}
+
+    /** Writes {prefix}mu.png, {prefix}energy.png, {prefix}orbit.png, {prefix}convergence.png into dir. */
+    public static void writeAll(CaseResult r, Path dir, String prefix) {
+        save(mu(r), dir.resolve(prefix + "mu.png"));
+        save(energy(r), dir.resolve(prefix + "energy.png"));
+        save(orbit(r), dir.resolve(prefix + "orbit.png"));
+        save(convergence(r), dir.resolve(prefix + "convergence.png"));
+    }
+
+    static XYChart mu(CaseResult r) {
+        XYChart c = chart("gyro-averaged mu: |<mu>_k/<mu>_0 - 1|, " + r.resolved().spec().name(),
+                "t / Tc", "|<mu>_k/<mu>_0 - 1|");
+        c.getStyler().setYAxisLogarithmic(true);
+        double tc = r.resolved().gyroPeriod();
+        for (CaseResult.Curve k : r.muCurves()) {
+            if (k.t().length > 1) {
+                line(c, k.label(), scale(k.t(), 1 / tc), abs(k.y()));
+            }
+        }
+        return c;
+    }
+
+    static XYChart energy(CaseResult r) {
+        XYChart c = chart("energy error |W - W0|/K0, " + r.resolved().spec().name(), "t / Tc", "|W - W0| / K0");
+        c.getStyler().setYAxisLogarithmic(true);
+        double tc = r.resolved().gyroPeriod();
+        for (CaseResult.Curve k : r.energyCurves()) {
+            if (k.t().length > 1) {
+                line(c, k.label(), scale(k.t(), 1 / tc), abs(k.y()));
+            }
+        }
+        return c;
+    }
+
+    static XYChart orbit(CaseResult r) {
+        String proj = PROJECTION.getOrDefault(r.resolved().spec().field(), "x-y");
+        String[] ax = proj.split("-");
+        double tc = r.resolved().gyroPeriod();
+        XYChart c = chart("guiding-center orbit, " + r.resolved().spec().name() + " (phase 0)",
+                label(ax[0]), label(ax[1]));
+        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
+        addTrack(c, "full orbit, gyro-averaged (reference)", r.fullOrbitCenters(), ax, tc);
+        addTrack(c, "guiding center (reference)", r.gcTrack(), ax, tc);
+        return c;
+    }
+
+    static XYChart convergence(CaseResult r) {
+        XYChart c = chart("convergence at the end time, " + r.resolved().spec().name(), "dt / Tc",
+                "|x - x_ref| / rho0 (phase 0)");
+        c.getStyler().setXAxisLogarithmic(true);
+        c.getStyler().setYAxisLogarithmic(true);
+        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideSE);
+        double tc = r.resolved().gyroPeriod();
+        for (ResultRow row : r.rows()) {
+            if (row.convergenceDt().length == 0) {
+                continue;
+            }
+            double[] e = row.convergenceError();
+            boolean ok = true;
+            for (double v : e) {
+                ok &= v > 0 && Double.isFinite(v);
+            }
+            if (!ok) {
+                continue;
+            }
+            String order = Double.isNaN(row.order()) ? "order not measurable"
+                    : String.format(Locale.ROOT, "order %.2f", row.order());
+            XYSeries s = c.addSeries(row.integrator() + " (" + order + ")", scale(row.convergenceDt(), 1 / tc), e);
+            s.setMarker(SeriesMarkers.CIRCLE);
+        }
+        if (c.getSeriesMap().isEmpty()) {
+            c.addSeries("no integrator converged measurably", new double[] {1}, new double[] {1});
+        }
+        return c;
+    }
+
+    private static void addTrack(XYChart c, String name, Track t, String[] ax, double tc) {
+        int n = t.size();
+        if (n < 2) {
+            return;
+        }
+        double[] a = new double[n];
+        double[] b = new double[n];
+        for (int i = 0; i < n; i++) {
+            a[i] = coord(t, i, ax[0], tc);
+            b[i] = coord(t, i, ax[1], tc);
+        }
+        line(c, name, a, b);
+    }
+
+    private static double coord(Track t, int i, String axis, double tc) {
+        return switch (axis) {
+            case "t" -> t.time(i) / tc;
+            case "x" -> t.coord(i, 0);
+            case "y" -> t.coord(i, 1);
+            case "z" -> t.coord(i, 2);
+            case "R" -> Math.hypot(t.coord(i, 0), t.coord(i, 1));
+            default -> throw new IllegalStateException(axis);
+        };
+    }
+
+    private static String label(String axis) {
+        return axis.equals("t") ? "t / Tc" : axis + " (m)";
+    }
+
+    private static XYChart chart(String title, String x, String y) {
+        XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(x).yAxisTitle(y).build();
+        c.getStyler().setMarkerSize(5);
+        c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS);
+        c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
+        c.getStyler().setPlotBackgroundColor(java.awt.Color.WHITE);
+        return c;
+    }
+
+    private static void line(XYChart c, String name, double[] x, double[] y) {
+        XYSeries s = c.addSeries(name, x, y);
+        s.setMarker(SeriesMarkers.NONE);
+        s.setLineWidth(1.2f);
+    }
+
+    private static double[] scale(double[] v, double k) {
+        double[] r = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            r[i] = v[i] * k;
+        }
+        return r;
+    }
+
+    private static double[] abs(double[] v) {
+        double[] r = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            double a = Math.abs(v[i]);
+            r[i] = a > LOG_FLOOR && Double.isFinite(a) ? a : LOG_FLOOR;
+        }
+        return r;
+    }
+
+    /** Renders a chart to PNG and writes it atomically. */
+    static void save(XYChart c, Path file) {
+        try {
+            AtomicFiles.write(file, BitmapEncoder.getBitmapBytes(c, BitmapEncoder.BitmapFormat.PNG));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot render " + file + ": " + e.getMessage(), e);
+        }
+    }
+}
