@@ -30,11 +30,13 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
      * Measures every point not already saved, then writes scan.md/.csv/.json/.png into
      * {@code out} and removes the partial results.
      *
-     * @param resume true to take up the points saved by an interrupted run of the same scan
+     * @param resume       true to take up the points saved by an interrupted run of the same scan
+     * @param pointThreads points measured at the same time; 1 when the evaluator spreads each point
+     *                     over the cores itself (as {@link ModelErrorEvaluator} does)
      */
-    public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int threads, ScanProgress progress) {
+    public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
         ScanCheckpoint cp = ScanCheckpoint.open(out, settings, resume);
-        List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, threads, progress);
+        List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, pointThreads, progress);
         ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis));
         ScanOutputs.write(r, out);
         cp.delete();

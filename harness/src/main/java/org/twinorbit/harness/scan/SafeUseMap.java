@@ -97,6 +97,7 @@ public final class SafeUseMap {
                 q.species = s;
                 q.points = res.points();
                 q.phases = res.phases();
+                q.threads = threads;
                 scans.add(q.build());
                 names.add(p.name() + "-" + s.name());
             }
@@ -107,7 +108,7 @@ public final class SafeUseMap {
         List<Row> rows = new ArrayList<>();
         for (int i = 0; i < scans.size(); i++) {
             ScanRequest.Built b = scans.get(i);
-            ScanResult r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, threads, overall);
+            ScanResult r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, 1, overall);
             double[] eps = b.scan().eps();
             for (Threshold t : r.thresholds()) {
                 rows.add(new Row((String) r.settings().get("field"), (String) r.settings().get("species"),

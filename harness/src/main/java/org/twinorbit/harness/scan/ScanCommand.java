@@ -91,6 +91,12 @@ public final class ScanCommand implements Runnable {
             description = "Relative tolerance of both references (default: ${DEFAULT-VALUE}).")
     double referenceRtol = CaseSpec.DEFAULT_RTOL;
 
+    @Option(names = "--integrators", split = ",", paramLabel = "NAME",
+            description = "Pushers and guiding-center integrators (see 'twinorbit integrators') to run at their default "
+                    + "step beside the references, so that each point shows their discretisation error next to the "
+                    + "model error (default: none).")
+    List<String> integrators = new ArrayList<>();
+
     @Option(names = "--out", defaultValue = "scan-results", paramLabel = "DIR",
             description = "Output directory (default: ${DEFAULT-VALUE}).")
     Path out;
@@ -117,10 +123,10 @@ public final class ScanCommand implements Runnable {
         long t0 = System.nanoTime();
         ScanResult r;
         if (quiet) {
-            r = setup.scan().run(setup.evaluator(), out, resume, threads, ScanProgress.NONE);
+            r = setup.scan().run(setup.evaluator(), out, resume, 1, ScanProgress.NONE);
         } else {
             try (ScanProgressBar bar = new ScanProgressBar("scan " + field)) {
-                r = setup.scan().run(setup.evaluator(), out, resume, threads, bar);
+                r = setup.scan().run(setup.evaluator(), out, resume, 1, bar);
             }
         }
         PrintWriter w = spec.commandLine().getOut();
@@ -176,6 +182,8 @@ public final class ScanCommand implements Runnable {
         q.durationUnit = durationUnit == null ? null : ScanDuration.Unit.parse(durationUnit);
         q.tolerances = tolerances();
         q.referenceRtol = referenceRtol;
+        q.integrators = integrators;
+        q.threads = threads;
         return q.build();
     }
 

@@ -7,6 +7,7 @@ import java.util.Map;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.harness.cases.CaseSpec;
+import org.twinorbit.harness.run.Registry;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
@@ -32,6 +33,10 @@ public final class ScanRequest {
     /** Tolerances by metric; metrics not named keep their default. */
     public Map<ScanMetric, List<Double>> tolerances = new LinkedHashMap<>();
     public double referenceRtol = CaseSpec.DEFAULT_RTOL;
+    /** Pushers and guiding-center integrators to scan at their step beside the references. */
+    public List<String> integrators = List.of();
+    /** Worker threads of each point (the points themselves run one after the other). */
+    public int threads = Runtime.getRuntime().availableProcessors();
 
     /** A scan and the evaluator of its points. */
     public record Built(BreakdownScan scan, PointEvaluator evaluator) {}
@@ -75,6 +80,23 @@ public final class ScanRequest {
         if (!(referenceRtol >= 1e-13 && referenceRtol <= 1e-6)) {
             throw new IllegalArgumentException("--reference-rtol must lie in [1e-13, 1e-6], got " + referenceRtol);
         }
+        if (threads < 1) {
+            throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
+        }
+        List<String> pushers = new ArrayList<>();
+        List<String> gcs = new ArrayList<>();
+        for (String name : integrators) {
+            if (Registry.pusherNames().contains(name)) {
+                pushers.add(name);
+            } else if (Registry.guidingCenterNames().contains(name)) {
+                gcs.add(name);
+            } else {
+                List<String> all = new ArrayList<>(Registry.pusherNames());
+                all.addAll(Registry.guidingCenterNames());
+                throw new IllegalArgumentException("--integrators: unknown integrator '" + name + "'; allowed: "
+                        + String.join(", ", all));
+            }
+        }
         ScanAxis axis = axis(f, recipe, x0, hi);
         Map<String, Object> settings = new LinkedHashMap<>();
         settings.put("field", field);
@@ -96,8 +118,9 @@ public final class ScanRequest {
         settings.put("duration", d.value());
         settings.put("duration_unit", d.unit().label());
         settings.put("reference_rtol", referenceRtol);
+        settings.put("integrators", new ArrayList<>(integrators));
         ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
-                referenceRtol);
+                referenceRtol, pushers, gcs, threads);
         return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances()), ev);
     }
 

@@ -8,7 +8,10 @@ import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussInteg
 import org.junit.jupiter.api.Test;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
-import org.twinorbit.harness.cases.Placement;
+import java.util.List;
+import org.twinorbit.integrators.GyroParticle;
+import org.twinorbit.integrators.GyroPlacement;
+import org.twinorbit.integrators.InitialCondition;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
@@ -32,7 +35,7 @@ class GradientDriftScanTest {
 
     @Test
     void driftErrorMatchesExactFiniteEpsDrift() {
-        ScanCommand.ScanSetup setup = ScanTestSupport.setup("--field", "gradient", "--phases", "4",
+        ScanRequest.Built setup = ScanTestSupport.setup("--field", "gradient", "--phases", "4",
                 "--pitch", "90");
         Field f = Fields.create("gradient", P);
         EnergyScale scale = new EnergyScale(f, P, Vec3.ZERO);
@@ -47,9 +50,11 @@ class GradientDriftScanTest {
             double vGc = pPerp * pPerp * b0 / (2 * gamma * P.mass() * P.charge() * b0 * b0 * length);
             double sum = 0;
             double worst = 0;
-            for (int k = 0; k < PHASES; k++) {
-                Placement pl = Placement.of(f, P, Vec3.ZERO, u, 90.0, 2 * Math.PI * k / PHASES);
-                double vExact = exactDrift(pl.x()[0], pl.u(), gamma, b0, length);
+            // the ensemble the scan runs: zeroth-order placement around the same guiding center
+            List<GyroParticle> ring = InitialCondition.ofEnergy(f, P, energy, 90.0, Vec3.ZERO)
+                    .particles(PHASES, GyroPlacement.ZEROTH_EXB);
+            for (GyroParticle pk : ring) {
+                double vExact = exactDrift(pk.position().x(), pk.u().toArray(), gamma, b0, length);
                 double e = Math.abs(vGc - vExact) / Math.abs(vExact);
                 sum += e;
                 worst = Math.max(worst, e);

@@ -9,16 +9,16 @@ final class ScanTestSupport {
     private ScanTestSupport() {}
 
     /** The checked setup of {@code twinorbit scan ARGS}, nothing computed. */
-    static ScanCommand.ScanSetup setup(String... args) {
+    static ScanRequest.Built setup(String... args) {
         ScanCommand cmd = new ScanCommand();
         new CommandLine(cmd).parseArgs(args);
         return cmd.setup();
     }
 
-    /** Runs the scan of {@code ARGS} on 2 threads into {@code out}. */
+    /** Runs the scan of {@code ARGS} into {@code out}, each point on all cores. */
     static ScanResult run(Path out, String... args) {
-        ScanCommand.ScanSetup s = setup(args);
-        return s.scan().run(s.evaluator(), out, false, 2, ScanProgress.NONE);
+        ScanRequest.Built s = setup(args);
+        return s.scan().run(s.evaluator(), out, false, 1, ScanProgress.NONE);
     }
 
     /** The point of a result at ε (exact match). */

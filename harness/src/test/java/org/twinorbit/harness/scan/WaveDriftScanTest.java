@@ -16,7 +16,7 @@ class WaveDriftScanTest {
 
     @Test
     void missingPolarizationDriftGivesErrorOmegaOverOmegaC() {
-        ScanCommand.ScanSetup setup = ScanTestSupport.setup("--field", "wave", "--phases", "4");
+        ScanRequest.Built setup = ScanTestSupport.setup("--field", "wave", "--phases", "4");
         for (double r : new double[] {0.02, 0.05, 0.1}) {
             Map<String, Double> m = setup.evaluator().measure(r, 1e3, 90.0);
             // Two wave periods hold 2/r gyrations; the gyro-averaged track covers all but about
