@@ -105,6 +105,12 @@ public final class ScanPlot {
                 }
             }
         }
+        // within two decades XChart would label no tick at all unless every tick is labelled
+        double lo = c.getSeriesMap().values().stream().flatMapToDouble(x -> java.util.Arrays.stream(x.getYData()))
+                .filter(v -> v > 0).min().orElse(1);
+        double hi = c.getSeriesMap().values().stream().flatMapToDouble(x -> java.util.Arrays.stream(x.getYData()))
+                .max().orElse(1);
+        c.getStyler().setYAxisLogarithmicDecadeOnly(hi / lo > 100);
         return c;
     }
 

@@ -1,0 +1,67 @@
+package org.twinorbit.harness.scan;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** Bad input is refused before any orbit runs, with a message naming the option and what is allowed. */
+class ScanCommandInputTest {
+
+    private static String refused(String... args) {
+        return assertThrows(IllegalArgumentException.class, () -> ScanTestSupport.setup(args)).getMessage();
+    }
+
+    @Test
+    void messagesNameTheOptionAndTheAllowedValues() {
+        assertTrue(refused("--field", "nowhere").contains("allowed: uniform, crossed, gradient"));
+        assertTrue(refused("--field", "mirror", "--species", "muon").contains("allowed: electron, positron, proton"));
+        assertTrue(refused("--field", "mirror", "--pitch", "200").contains("--pitch must lie in [0, 180]"));
+        assertTrue(refused("--field", "mirror", "--eps-max", "1.5").contains("below 1"));
+        assertTrue(refused("--field", "mirror", "--eps-min", "0").contains("--eps-min must be in (0, 1)"));
+        assertTrue(refused("--field", "mirror", "--points", "1").contains("--points must be at least 2"));
+        assertTrue(refused("--field", "mirror", "--phases", "0").contains("--phases must lie in [1, 1024]"));
+        assertTrue(refused("--field", "mirror", "--tolerance", "speed=1")
+                .contains("--tolerance: unknown metric 'speed'; allowed: mu_jump, mu_change, drift_error"));
+        assertTrue(refused("--field", "mirror", "--tolerance", "mu_jump=-1").contains("must be a finite number >= 0"));
+        assertTrue(refused("--field", "mirror", "--tolerance", "mu_change=0.1").contains("give mu_jump instead"));
+        assertTrue(refused("--field", "uniform").contains("has no length L"));
+        assertTrue(refused("--field", "mirror", "--energy", "1000").contains("--energy applies to ramp and wave only"));
+        assertTrue(refused("--field", "mirror", "--duration-unit", "furlongs")
+                .contains("allowed: gyroperiods, bounces, field-periods"));
+        assertTrue(refused("--field", "gradient", "--duration-unit", "field-periods").contains("needs a time-dependent field"));
+        assertTrue(refused("--field", "mirror", "--param", "Rm=0.5").contains("'Rm'"));
+        assertTrue(refused("--field", "mirror", "--integrators", "euler").contains("--integrators: unknown integrator 'euler'; allowed: "));
+        assertTrue(refused("--field", "mirror", "--start", "0,0,2").contains("outside the domain"));
+        assertTrue(refused("--field", "ramp", "--param", "tau_periods=5").contains("the scan sets it from eps"));
+        assertTrue(refused("--field", "wave", "--eps-max", "0.9995").contains("cyclotron resonance"));
+        assertTrue(refused("--field", "mirror", "--reference-rtol", "1e-3").contains("--reference-rtol"));
+        assertTrue(refused("--field", "mirror", "--threads", "0").contains("--threads must be at least 1"));
+    }
+
+    @Test
+    void exitCodeTwoAndNothingWritten(@TempDir Path dir) {
+        Path out = dir.resolve("never");
+        StringWriter err = new StringWriter();
+        CommandLine cl = new CommandLine(new ScanCommand());
+        cl.setErr(new PrintWriter(err));
+        // the policy of the twinorbit command line (UserErrorHandler): a user mistake is exit code 2
+        cl.setExecutionExceptionHandler((ex, c, parsed) -> {
+            c.getErr().println(ex.getMessage());
+            return ex instanceof IllegalArgumentException ? 2 : 1;
+        });
+        assertEquals(2, cl.execute("--field", "mirror", "--pitch", "-5", "--out", out.toString()));
+        assertTrue(err.toString().contains("--pitch"), err.toString());
+        assertEquals(2, cl.execute("--field", "mirror", "--points", "many", "--out", out.toString()));
+        assertEquals(2, cl.execute("--safe-use", "--field", "mirror", "--out", out.toString()));
+        assertFalse(Files.exists(out), "no output may be written for bad input");
+    }
+}
