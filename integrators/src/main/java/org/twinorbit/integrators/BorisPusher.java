@@ -52,13 +52,15 @@ public final class BorisPusher extends LeapfrogPusher {
                 uy += h * f.ey;
                 uz += h * f.ez;
             }
-            double k = h * inverseGamma();
+            double ig = inverseGamma();
+            double k = h * ig;
             rotate(k * f.bx, k * f.by, k * f.bz);
-            if (electric) {
-                ux += h * f.ex;
-                uy += h * f.ey;
-                uz += h * f.ez;
+            if (!electric) {
+                return ig; // the rotation keeps |u|: no second square root
             }
+            ux += h * f.ex;
+            uy += h * f.ey;
+            uz += h * f.ez;
             return inverseGamma();
         }
     }
