@@ -7,7 +7,7 @@ import org.twinorbit.shared.FieldSample;
  * The relativistic Boris pusher: half electric kick, rotation about B by 2·atan(|t|) with
  * t = q B Δt / (2γm) and γ taken after the first kick, second half kick (J. P. Boris, Proc. 4th
  * Conf. Numerical Simulation of Plasmas, 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics
- * via Computer Simulation, 1991, §4-4 and §15-4). Volume-preserving (H. Qin et al., Phys.
+ * via Computer Simulation, 1991, §4-4 and §15-4, section from memory). Volume-preserving (H. Qin et al., Phys.
  * Plasmas 20, 084503, 2013) and time-reversible.
 
  */

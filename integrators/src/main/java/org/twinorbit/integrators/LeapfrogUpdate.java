@@ -151,7 +151,7 @@ abstract class LeapfrogUpdate {
 
     /**
      * Rotates u about t by the angle 2·atan(|t|) (the Boris rotation; Boris 1970, Birdsall &
-     * Langdon 1991, §4-4), in the two cross products of the published form.
+     * Langdon 1991, §4-4, section from memory), in the two cross products of the published form.
      *
      * @param tx rotation vector (dimensionless), the rotation is right-handed about −t
      */

@@ -42,7 +42,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * One step turns u by exactly 2·atan(q B Δt / (2γm)) in a uniform B, for any Δt (Birdsall &
-     * Langdon, Plasma Physics via Computer Simulation, 1991, §4-4; Qin et al., Phys. Plasmas 20,
+     * Langdon, Plasma Physics via Computer Simulation, 1991, §4-4, section from memory; Qin et al., Phys. Plasmas 20,
      * 084503, 2013), here summed over 20 gyrations.
      */
     @ParameterizedTest
@@ -110,7 +110,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * E×B drift, non-relativistic: the guiding center moves at E×B/B² (Jackson, Classical
-     * Electrodynamics, 3rd ed., §12.3). The step is chosen so that one discrete gyration is
+     * Electrodynamics, 3rd ed., §12.3, section from memory). The step is chosen so that one discrete gyration is
      * exactly 32 steps; over whole gyrations the gyration cancels and the mean velocity is the
      * drift.
      */
@@ -139,7 +139,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * The synchronised velocity of a particle gyrating in crossed fields keeps its gyration speed
-     * |u − v_E| exactly (non-relativistic exact motion; Jackson §12.3): the plain average of the
+     * |u − v_E| exactly (non-relativistic exact motion; Jackson §12.3, section from memory): the plain average of the
      * two half-step velocities would be short by 1/sqrt(1 + (Ω Δt/2)²) = −3.7 % at 16 steps per
      * gyration (DESIGN.md). At u ~ 1e4 m/s, γ − 1 ~ 1e-9 bounds what the relativistic schemes
      * may differ.
@@ -162,7 +162,7 @@ abstract class AbstractLeapfrogPusherTest {
     }
 
     /**
-     * E×B drift at v_E = c/2: the guiding center still moves at E×B/B² (Jackson §12.3, by a
+     * E×B drift at v_E = c/2: the guiding center still moves at E×B/B² (Jackson §12.3, section from memory, by a
      * Lorentz transformation to the frame where E vanishes), measured between same-phase
      * crossings (u_x rising through 0) located by cubic Hermite interpolation.
      */
@@ -185,7 +185,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * Uniform E from rest, no B: x(t) = (mc²/qE)(sqrt(1 + (qEt/mc)²) − 1) (Jackson, Classical
-     * Electrodynamics, 3rd ed., §12.3 problem / hyperbolic motion); non-relativistically
+     * Electrodynamics, 3rd ed., ch. 12, hyperbolic motion; section from memory); non-relativistically
      * x = qEt²/(2m), which leapfrog reproduces exactly at integer steps (common practice).
      */
     @Test
@@ -273,7 +273,7 @@ abstract class AbstractLeapfrogPusherTest {
     /**
      * Time-reversible: N steps forward, then N steps with −Δt from the mirrored staggering, come
      * back to the start (common practice for symmetric leapfrog schemes; Hairer, Lubich & Wanner,
-     * Geometric Numerical Integration, 2006, §V.1). Round-off only: ~N ε in units of ρ.
+     * Geometric Numerical Integration, 2006, §V.1, section from memory). Round-off only: ~N ε in units of ρ.
      */
     @Test
     void retracesItsOrbitBackwards() {
