@@ -388,6 +388,23 @@ abstract class AbstractLeapfrogPusherTest {
         assertFalse(s.step());
     }
 
+    /** In an ensemble a particle that leaves is frozen at its last good state and time; the others go on. */
+    @Test
+    void ensembleFreezesALostParticleOnly() {
+        FullOrbitEnsemble en = (FullOrbitEnsemble) pusher().ensemble(TestField.walled(1e-3, 1.0), P, 1e-8, 2);
+        en.ux[0] = 1e6; // ρ ≈ 10 m: reaches the wall at 1 m
+        en.ux[1] = 1e3; // ρ ≈ 1 cm: stays inside
+        en.start(0);
+        for (int k = 0; k < 2000; k++) {
+            en.step();
+        }
+        assertEquals(OrbitStatus.LOST, en.status(0));
+        assertEquals(OrbitStatus.OK, en.status(1));
+        assertTrue(en.time(0) < en.time() && en.time(0) > 0.9e-6, "stopped at " + en.time(0));
+        assertTrue(en.x[0] < 1.0 && en.x[0] > 0.98, "last good x = " + en.x[0]);
+        assertEquals(en.time(), en.time(1), 0.0);
+    }
+
     /** A field turning NaN makes the run UNSTABLE with the last finite state kept. */
     @Test
     void marksUnstableOnNonFiniteState() {
