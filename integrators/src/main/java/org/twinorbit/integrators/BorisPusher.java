@@ -52,9 +52,12 @@ public final class BorisPusher extends LeapfrogPusher {
                 uy += h * f.ey;
                 uz += h * f.ez;
             }
-            double ig = inverseGamma();
+            // γ² and 2/(1 + |t|²) = 2γ²/(γ² + h²B²) in parallel: one division less on the chain
+            double bx = f.bx, by = f.by, bz = f.bz;
+            double g2 = 1.0 + (ux * ux + uy * uy + uz * uz) * INV_C2;
+            double ig = 1.0 / Math.sqrt(g2);
             double k = h * ig;
-            rotate(k * f.bx, k * f.by, k * f.bz);
+            rotate(k * bx, k * by, k * bz, 2.0 * g2 / (g2 + h * h * (bx * bx + by * by + bz * bz)));
             if (!electric) {
                 return ig; // the rotation keeps |u|: no second square root
             }

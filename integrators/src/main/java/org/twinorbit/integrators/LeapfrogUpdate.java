@@ -156,7 +156,11 @@ abstract class LeapfrogUpdate {
      * @param tx rotation vector (dimensionless), the rotation is right-handed about −t
      */
     final void rotate(double tx, double ty, double tz) {
-        double f = 2.0 / (1.0 + tx * tx + ty * ty + tz * tz);
+        rotate(tx, ty, tz, 2.0 / (1.0 + tx * tx + ty * ty + tz * tz));
+    }
+
+    /** {@link #rotate(double, double, double)} with f = 2/(1 + |t|²) supplied by the caller. */
+    final void rotate(double tx, double ty, double tz, double f) {
         double sx = f * tx, sy = f * ty, sz = f * tz;
         double px = ux + (uy * tz - uz * ty);
         double py = uy + (uz * tx - ux * tz);
