@@ -80,7 +80,9 @@ public final class FullOrbitReference {
 
     /**
      * The reference's estimate of its own error: the final-state difference to the same run at a
-     * 100× tighter tolerance (clamped at {@link #TIGHTEST_RELATIVE_TOLERANCE}).
+     * 100× tighter tolerance (clamped at {@link #TIGHTEST_RELATIVE_TOLERANCE}). It is honest when
+     * the tighter run is much more accurate, i.e. while the tolerance is well above round-off; at
+     * the tightest tolerance both runs are the same and the estimate is zero, which says nothing.
      *
      * @param result        the run at this reference's tolerance
      * @param tighter       the same run at the tighter tolerance
