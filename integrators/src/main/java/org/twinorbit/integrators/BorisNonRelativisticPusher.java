@@ -6,7 +6,7 @@ import org.twinorbit.shared.FieldSample;
 /**
  * The non-relativistic Boris pusher (γ = 1, u = v): half electric kick, rotation about B by
  * 2·atan(Ω Δt / 2), half kick (J. P. Boris, Proc. 4th Conf. Numerical Simulation of Plasmas,
- * 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics via Computer Simulation, 1991, §4-4).
+ * 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics via Computer Simulation, 1991, §4-4, section from memory).
  * The fast path for particles far below the speed of light. Volume-preserving (H. Qin et al.,
  * Phys. Plasmas 20, 084503, 2013) and time-reversible.
  */

@@ -59,12 +59,13 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
                 kick(f, h);
             }
             double tx = h * f.bx, ty = h * f.by, tz = h * f.bz;
-            double k = rotationInverseGamma(ux * ux + uy * uy + uz * uz, ux * tx + uy * ty + uz * tz,
-                    tx * tx + ty * ty + tz * tz);
+            double u2 = ux * ux + uy * uy + uz * uz;
+            double k = rotationInverseGamma(u2, ux * tx + uy * ty + uz * tz, tx * tx + ty * ty + tz * tz);
             rotate(k * tx, k * ty, k * tz);
-            if (electric) {
-                kick(f, h);
+            if (!electric) {
+                return 1.0 / Math.sqrt(1.0 + u2 * INV_C2); // the rotation keeps |u|
             }
+            kick(f, h);
             return inverseGamma();
         }
     }

@@ -151,12 +151,16 @@ abstract class LeapfrogUpdate {
 
     /**
      * Rotates u about t by the angle 2·atan(|t|) (the Boris rotation; Boris 1970, Birdsall &
-     * Langdon 1991, §4-4), in the two cross products of the published form.
+     * Langdon 1991, §4-4, section from memory), in the two cross products of the published form.
      *
      * @param tx rotation vector (dimensionless), the rotation is right-handed about −t
      */
     final void rotate(double tx, double ty, double tz) {
-        double f = 2.0 / (1.0 + tx * tx + ty * ty + tz * tz);
+        rotate(tx, ty, tz, 2.0 / (1.0 + tx * tx + ty * ty + tz * tz));
+    }
+
+    /** {@link #rotate(double, double, double)} with f = 2/(1 + |t|²) supplied by the caller. */
+    final void rotate(double tx, double ty, double tz, double f) {
         double sx = f * tx, sy = f * ty, sz = f * tz;
         double px = ux + (uy * tz - uz * ty);
         double py = uy + (uz * tx - ux * tz);

@@ -6,7 +6,7 @@ import org.twinorbit.shared.FieldSample;
 /**
  * The Vay pusher: an explicit half step with the old velocity, then an implicit half step whose
  * Lorentz factor is solved in closed form, so that a particle moving at E×B/B² feels no force
- * (J.-L. Vay, Phys. Plasmas 15, 056701, 2008, eqs. 11-15). Time-reversible; not
+ * (J.-L. Vay, Phys. Plasmas 15, 056701, 2008). Time-reversible; not
  * volume-preserving (A. V. Higuera & J. R. Cary, Phys. Plasmas 24, 052104, 2017).
 
  */

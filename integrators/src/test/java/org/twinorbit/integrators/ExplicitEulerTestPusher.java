@@ -8,7 +8,7 @@ import org.twinorbit.shared.Species;
  * A pusher that lives only on the test class path, registered through
  * {@code src/test/resources/META-INF/services}, as a user's jar would add one: explicit
  * (forward) Euler on the Lorentz equations (Euler 1768; Hairer, Nørsett &amp; Wanner, Solving
- * ODEs I, 1993, §I.7).
+ * ODEs I, 1993, §I.7, section from memory).
  */
 public final class ExplicitEulerTestPusher implements FullOrbitPusher {
 

@@ -18,7 +18,7 @@ class FullOrbitReferenceTest {
 
     /**
      * Uniform B: an exact helix with Ω = qB/(γm) about the guiding center (Jackson, Classical
-     * Electrodynamics, 3rd ed., §12.2), here a 1 MeV proton over 20 gyrations. The reference
+     * Electrodynamics, 3rd ed., §12.2, section from memory), here a 1 MeV proton over 20 gyrations. The reference
      * must agree to 1e-9 ρ and its self-estimate must be within 10× of its true error.
      */
     @Test
@@ -44,7 +44,7 @@ class FullOrbitReferenceTest {
 
     /**
      * Crossed E and B, non-relativistic exact solution: v = v_E + rotating gyration,
-     * v_E = E×B/B² (Jackson §12.3), at u ~ 30 m/s so that relativistic terms (u²/c² ~ 1e-14)
+     * v_E = E×B/B² (Jackson §12.3, section from memory), at u ~ 30 m/s so that relativistic terms (u²/c² ~ 1e-14)
      * stay far below the 1e-9 checked.
      */
     @Test

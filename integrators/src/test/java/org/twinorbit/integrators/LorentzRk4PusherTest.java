@@ -16,7 +16,7 @@ class LorentzRk4PusherTest {
     /**
      * In a uniform B, RK4 multiplies the gyration amplitude by |R(iΩΔt)| per step with
      * R(z) = 1 + z + z²/2 + z³/6 + z⁴/24, |R(ix)|² = (1 − x²/2 + x⁴/24)² + (x − x³/6)² &lt; 1
-     * (Hairer, Nørsett &amp; Wanner, Solving ODEs I, 1993, §IV.2): the energy decreases every
+     * (Hairer, Nørsett &amp; Wanner, Solving ODEs I, 1993, §IV.2, section from memory): the energy decreases every
      * step, secularly, by exactly that factor. At u = 1 km/s relativistic corrections are 1e-11.
      */
     @Test

@@ -29,7 +29,7 @@ class PushersTest {
     /**
      * The pusher found on the test class path runs: explicit Euler in a uniform B multiplies
      * |u| by sqrt(1 + (Ω Δt)²) every step (its stability function |1 + iΩΔt|; Hairer, Nørsett
-     * &amp; Wanner, Solving ODEs I, 1993, §IV.2). At u = 1 km/s relativistic terms are 1e-11.
+     * &amp; Wanner, Solving ODEs I, 1993, §IV.2, section from memory). At u = 1 km/s relativistic terms are 1e-11.
      */
     @Test
     void runsAPusherRegisteredFromTheTestClassPath() {

@@ -8,7 +8,7 @@ import org.twinorbit.shared.Constants;
 import org.twinorbit.shared.Species;
 
 /**
- * Vay's force-free test (J.-L. Vay, Phys. Plasmas 15, 056701, 2008, §III): a particle moving
+ * Vay's force-free test (J.-L. Vay, Phys. Plasmas 15, 056701, 2008): a particle moving
  * exactly at v = E×B/B² with E &lt; cB feels E + v×B = 0 and must go straight. Vay's and
  * Higuera–Cary's pushers keep it straight to round-off; relativistic Boris computes γ after a
  * half kick, which no longer matches v, and deflects it.
@@ -52,7 +52,7 @@ class VayForceFreeTest {
     @Test
     void borisIsDeflected() {
         double d = deviation(new BorisPusher());
-        // the spurious force is of order one in γ_E at this Ω Δt (Vay 2008, Fig. 1)
+        // the spurious force is of order one in γ_E at this Ω Δt (Vay 2008)
         assertTrue(d > 1e-4, "Boris deviation " + d);
     }
 }
