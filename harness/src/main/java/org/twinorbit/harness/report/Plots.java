@@ -60,8 +60,12 @@ public final class Plots {
         c.getStyler().setYAxisLogarithmic(true);
         double tc = r.resolved().gyroPeriod();
         for (CaseResult.Curve k : r.muCurves()) {
-            if (k.t().length > 1) {
-                line(c, k.label(), scale(k.t(), 1 / tc), abs(k.y()));
+            int n = k.t().length;
+            if (n > 2) {
+                // gyration 0 is the reference value itself: its change is zero by definition
+                double[] t = java.util.Arrays.copyOfRange(k.t(), 1, n);
+                double[] y = java.util.Arrays.copyOfRange(k.y(), 1, n);
+                line(c, k.label(), scale(t, 1 / tc), abs(y));
             }
         }
         return c;
@@ -150,12 +154,20 @@ public final class Plots {
         return axis.equals("t") ? "t / Tc" : axis + " (m)";
     }
 
+    /** Distinct colours, so that no two series of a plot share one. */
+    private static final java.awt.Color[] PALETTE = {
+        new java.awt.Color(0x1f77b4), new java.awt.Color(0xd62728), new java.awt.Color(0x2ca02c),
+        new java.awt.Color(0xff7f0e), new java.awt.Color(0x9467bd), new java.awt.Color(0x8c564b),
+        new java.awt.Color(0xe377c2), new java.awt.Color(0x17becf), new java.awt.Color(0x7f7f7f),
+        new java.awt.Color(0xbcbd22)};
+
     private static XYChart chart(String title, String x, String y) {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(x).yAxisTitle(y).build();
         c.getStyler().setMarkerSize(5);
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS);
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setPlotBackgroundColor(java.awt.Color.WHITE);
+        c.getStyler().setSeriesColors(PALETTE);
         return c;
     }
 

@@ -121,6 +121,7 @@ public final class CaseRunner {
         FullOrbitRecord[] foRef;
         FullOrbitRecord foTight;
         FullOrbitRecord convRef;
+        FullOrbitRecord convTight;
         GuidingCenterRecord[] gc;
         GuidingCenterRecord[][] gcConv;
         GuidingCenterRecord gcRef;
@@ -226,6 +227,9 @@ public final class CaseRunner {
             long convSamples = Math.max(1, (long) Math.ceil(convN * dt / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO));
             jobs.add(new Parallel.Job(convSamples * 40.0, () -> convRef = References.fullOrbit(rc.field(), rc.species(),
                     x0[0], u0[0], convN * dt, convSamples, c.referenceRtol(), 1, deadband)));
+            jobs.add(new Parallel.Job(convSamples * 80.0, () -> convTight = References.fullOrbit(rc.field(),
+                    rc.species(), x0[0], u0[0], convN * dt, convSamples, References.tighter(c.referenceRtol()), 1,
+                    deadband)));
             for (int i = 0; i < np; i++) {
                 for (int level = 0; level < 3; level++) {
                     int ii = i;
