@@ -43,7 +43,7 @@ final class Assembly {
         int nph = p.x0.length;
         List<ResultRow> rows = new ArrayList<>();
         double foSelf = distance(p.foRef[0].finalX(), p.foTight.finalX()) / rho;
-        double convSelf = distance(p.convRef.finalX(), p.convTight.finalX()) / rho;
+        double convSelf = p.convRef == null ? Double.NaN : distance(p.convRef.finalX(), p.convTight.finalX()) / rho;
         double gcSelf = distance(p.gcRef.finalX(), p.gcTight.finalX()) / rho;
 
         for (int i = 0; i < p.pushers.size(); i++) {
