@@ -6,7 +6,7 @@ import picocli.CommandLine.Option;
 public final class ExecutionOptions {
 
     @Option(names = "--threads", paramLabel = "N",
-            description = "Worker threads (default: all ${sys:twinorbit.cores:-available} cores). Results do not depend on it.")
+            description = "Worker threads (default: all available cores); the results do not depend on it.")
     Integer threads;
 
     @Option(names = {"-q", "--quiet"}, description = "No progress bar on stderr.")

@@ -52,11 +52,29 @@ public final class CaseFile {
             }
             return s;
         } catch (UnrecognizedPropertyException e) {
-            throw new BadInputException(where(source, e.getLocation()) + "unknown key '"
+            throw new BadInputException(keyWhere(source, text, e) + "unknown key '"
                     + e.getPropertyName() + "'; allowed keys: " + String.join(", ", CaseSpec.KEYS), e);
         } catch (JsonProcessingException e) {
             throw new BadInputException(where(source, e.getLocation()) + e.getOriginalMessage(), e);
         }
+    }
+
+    /** Line and column of the unknown key itself (the parser reports the end of its value). */
+    private static String keyWhere(String source, String text, UnrecognizedPropertyException e) {
+        JsonLocation loc = e.getLocation();
+        if (loc == null) {
+            return source + ": ";
+        }
+        String[] lines = text.split("\n", -1);
+        int line = loc.getLineNr();
+        int col = loc.getColumnNr();
+        if (line >= 1 && line <= lines.length) {
+            int i = lines[line - 1].indexOf(e.getPropertyName());
+            if (i >= 0) {
+                col = i + 1;
+            }
+        }
+        return source + ": line " + line + ", column " + col + ": ";
     }
 
     private static String where(String source, JsonLocation loc) {

@@ -60,8 +60,12 @@ public final class Plots {
         c.getStyler().setYAxisLogarithmic(true);
         double tc = r.resolved().gyroPeriod();
         for (CaseResult.Curve k : r.muCurves()) {
-            if (k.t().length > 1) {
-                line(c, k.label(), scale(k.t(), 1 / tc), abs(k.y()));
+            int n = k.t().length;
+            if (n > 2) {
+                // gyration 0 is the reference value itself: its change is zero by definition
+                double[] t = java.util.Arrays.copyOfRange(k.t(), 1, n);
+                double[] y = java.util.Arrays.copyOfRange(k.y(), 1, n);
+                line(c, k.label(), scale(t, 1 / tc), abs(y));
             }
         }
         return c;
@@ -150,12 +154,20 @@ public final class Plots {
         return axis.equals("t") ? "t / Tc" : axis + " (m)";
     }
 
+    /** Distinct colours, so that no two series of a plot share one. */
+    private static final java.awt.Color[] PALETTE = {
+        new java.awt.Color(0x1f77b4), new java.awt.Color(0xd62728), new java.awt.Color(0x2ca02c),
+        new java.awt.Color(0xff7f0e), new java.awt.Color(0x9467bd), new java.awt.Color(0x8c564b),
+        new java.awt.Color(0xe377c2), new java.awt.Color(0x17becf), new java.awt.Color(0x7f7f7f),
+        new java.awt.Color(0xbcbd22)};
+
     private static XYChart chart(String title, String x, String y) {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(x).yAxisTitle(y).build();
         c.getStyler().setMarkerSize(5);
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS);
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setPlotBackgroundColor(java.awt.Color.WHITE);
+        c.getStyler().setSeriesColors(PALETTE);
         return c;
     }
 
@@ -185,9 +197,28 @@ public final class Plots {
     /** Renders a chart to PNG and writes it atomically. */
     static void save(XYChart c, Path file) {
         try {
-            AtomicFiles.write(file, BitmapEncoder.getBitmapBytes(c, BitmapEncoder.BitmapFormat.PNG));
+            AtomicFiles.write(file, png(BitmapEncoder.getBufferedImage(c)));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot render " + file + ": " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * PNG bytes at a fast deflate level: line plots on a white background compress well at any
+     * level, and the default level costs as much time as drawing the chart.
+     */
+    static byte[] png(java.awt.image.BufferedImage img) throws IOException {
+        javax.imageio.ImageWriter w = javax.imageio.ImageIO.getImageWritersByFormatName("png").next();
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (javax.imageio.stream.ImageOutputStream out = javax.imageio.ImageIO.createImageOutputStream(bytes)) {
+            w.setOutput(out);
+            javax.imageio.ImageWriteParam p = w.getDefaultWriteParam();
+            p.setCompressionMode(javax.imageio.ImageWriteParam.MODE_EXPLICIT);
+            p.setCompressionQuality(0.8f); // deflate level 9 − round(9 × 0.8) ≈ 2 (JDK PNG writer)
+            w.write(null, new javax.imageio.IIOImage(img, null, null), p);
+        } finally {
+            w.dispose();
+        }
+        return bytes.toByteArray();
     }
 }

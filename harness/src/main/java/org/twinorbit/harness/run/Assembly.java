@@ -43,6 +43,7 @@ final class Assembly {
         int nph = p.x0.length;
         List<ResultRow> rows = new ArrayList<>();
         double foSelf = distance(p.foRef[0].finalX(), p.foTight.finalX()) / rho;
+        double convSelf = p.convRef == null ? Double.NaN : distance(p.convRef.finalX(), p.convTight.finalX()) / rho;
         double gcSelf = distance(p.gcRef.finalX(), p.gcTight.finalX()) / rho;
 
         for (int i = 0; i < p.pushers.size(); i++) {
@@ -91,7 +92,7 @@ final class Assembly {
                 wall += runs[l].outcome().wallNanos();
             }
             rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, inv, cls, refCls,
-                    order(dts, errs, foSelf), dts, errs, steps / nph, evals / nph, wall));
+                    order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall));
         }
 
         // guiding-center rows: the ensemble shares one guiding center, so one run stands for all phases
@@ -178,11 +179,17 @@ final class Assembly {
                 p.foRef[0].gyro().centers(), p.gcRef.recorder().track());
     }
 
-    /** Drift error over the window w, NaN below {@link #DRIFT_FLOOR_RHO}. */
+    /**
+     * Drift error over the reference's whole-period window w, cut to the time both tracks
+     * cover (a pusher with a phase lag finishes its last whole gyration a little earlier); both
+     * tracks are averaged over the same span. NaN below {@link #DRIFT_FLOOR_RHO}.
+     */
     private static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
-        double floor = DRIFT_FLOOR_RHO * rho / (w[1] - w[0]);
-        return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, w[0], w[1]),
-                OrbitMetrics.meanPerpendicularVelocity(f, refTr, w[0], w[1]), floor);
+        double ta = Math.max(w[0], Math.max(tr.firstTime(), refTr.firstTime()));
+        double tb = Math.min(w[1], Math.min(tr.lastTime(), refTr.lastTime()));
+        double floor = DRIFT_FLOOR_RHO * rho / (tb - ta);
+        return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb),
+                OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb), floor);
     }
 
     private static Map<String, double[]> newMetrics(int nph) {

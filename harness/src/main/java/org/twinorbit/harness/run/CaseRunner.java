@@ -66,6 +66,15 @@ public final class CaseRunner {
 
     /** Runs several cases on one pool; results in the order of the cases. */
     public List<CaseResult> run(List<Case> cases) {
+        return run(cases, r -> { });
+    }
+
+    /**
+     * Runs several cases on one pool; results in the order of the cases. {@code onCase} receives
+     * each case's result as soon as all of its orbits are done (in completion order, from a
+     * worker thread), so that a caller can save partial results of a long run.
+     */
+    public List<CaseResult> run(List<Case> cases, java.util.function.Consumer<CaseResult> onCase) {
         List<Plan> plans = new ArrayList<>();
         for (Case c : cases) {
             plans.add(new Plan(new ResolvedCase(c)));
@@ -82,12 +91,24 @@ public final class CaseRunner {
         List<Parallel.Job> jobs = new ArrayList<>();
         for (Plan p : plans) {
             p.schedule();
-            p.addJobs(jobs);
+            List<Parallel.Job> own = new ArrayList<>();
+            p.addJobs(own);
+            // the job that finishes a case assembles it; the counter orders the slots' writes before it
+            java.util.concurrent.atomic.AtomicInteger left = new java.util.concurrent.atomic.AtomicInteger(own.size());
+            for (Parallel.Job j : own) {
+                jobs.add(new Parallel.Job(j.cost(), () -> {
+                    j.work().run();
+                    if (left.decrementAndGet() == 0) {
+                        p.result = Assembly.assemble(p);
+                        onCase.accept(p.result);
+                    }
+                }));
+            }
         }
-        new Parallel(threads, quiet, cases.size() == 1 ? "orbits" : "suite").run(jobs);
+        new Parallel(threads, quiet, cases.size() == 1 ? "orbits" : "cases").run(jobs);
         List<CaseResult> out = new ArrayList<>();
         for (Plan p : plans) {
-            out.add(Assembly.assemble(p));
+            out.add(p.result);
         }
         return out;
     }
@@ -120,7 +141,9 @@ public final class CaseRunner {
         FullOrbitRecord[][] foConv;
         FullOrbitRecord[] foRef;
         FullOrbitRecord foTight;
+        CaseResult result;
         FullOrbitRecord convRef;
+        FullOrbitRecord convTight;
         GuidingCenterRecord[] gc;
         GuidingCenterRecord[][] gcConv;
         GuidingCenterRecord gcRef;
@@ -224,8 +247,15 @@ public final class CaseRunner {
             jobs.add(new Parallel.Job(gcN * 8.0, () -> gcTight = References.guidingCenter(rc.field(), rc.species(),
                     mu, gc0, pPar0, tEnd, samples, References.tighter(c.referenceRtol()), refStride, deadband, 0)));
             long convSamples = Math.max(1, (long) Math.ceil(convN * dt / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO));
+            if (np == 0) {
+                addGuidingCenterConvergence(jobs, ng);
+                return;
+            }
             jobs.add(new Parallel.Job(convSamples * 40.0, () -> convRef = References.fullOrbit(rc.field(), rc.species(),
                     x0[0], u0[0], convN * dt, convSamples, c.referenceRtol(), 1, deadband)));
+            jobs.add(new Parallel.Job(convSamples * 80.0, () -> convTight = References.fullOrbit(rc.field(),
+                    rc.species(), x0[0], u0[0], convN * dt, convSamples, References.tighter(c.referenceRtol()), 1,
+                    deadband)));
             for (int i = 0; i < np; i++) {
                 for (int level = 0; level < 3; level++) {
                     int ii = i;
@@ -236,6 +266,10 @@ public final class CaseRunner {
                             deadband)));
                 }
             }
+            addGuidingCenterConvergence(jobs, ng);
+        }
+
+        private void addGuidingCenterConvergence(List<Parallel.Job> jobs, int ng) {
             for (int g = 0; g < ng; g++) {
                 for (int level = 0; level < 2; level++) {
                     int gg = g;
