@@ -38,8 +38,10 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
             // trapped at the outboard start r = a/2 when sin²α > (1 − r/R0)/(1 + r/R0) = 0.71, α > 57.7°
             case "tokamak" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
             // 30° mirrors where |B| = 4 Bn, about 4 R_c from the sheet: each bounce crosses the
-            // curved region from where the particle is adiabatic
-            case "current-sheet" -> new ScanField(5e-3, 0.6, 30, BOUNCE_3, Double.NaN, null);
+            // curved region from where the particle is adiabatic. κ = 10 at the smallest ε is deep
+            // in the adiabatic regime; two bounces give two sheet crossings in each direction.
+            case "current-sheet" -> new ScanField(0.01, 0.6, 30, new ScanDuration(2, ScanDuration.Unit.BOUNCES),
+                    Double.NaN, null);
             case "ramp" -> new ScanField(1e-3, 0.3, 90, new ScanDuration(1, ScanDuration.Unit.FIELD_PERIODS),
                     1e3, "tau_periods");
             case "wave" -> new ScanField(0.01, 0.5, 90, new ScanDuration(2, ScanDuration.Unit.FIELD_PERIODS),
