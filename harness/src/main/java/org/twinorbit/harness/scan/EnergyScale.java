@@ -41,16 +41,6 @@ public final class EnergyScale {
         this.length = field.length();
     }
 
-    /** |B| at the initial guiding center (T). */
-    public double referenceField() {
-        return b0;
-    }
-
-    /** The field's length L (m). */
-    public double length() {
-        return length;
-    }
-
     /** Kinetic energy (eV) at which ρ0/L equals {@code eps}. */
     public double energyEv(double eps) {
         double p = eps * length * Math.abs(species.charge()) * b0;
@@ -60,10 +50,5 @@ public final class EnergyScale {
     /** ε = ρ0/L for a kinetic energy (eV). */
     public double eps(double energyEv) {
         return Relativity.momentumFromKinetic(species, energyEv) / (Math.abs(species.charge()) * b0 * length);
-    }
-
-    /** Gyroradius ρ0 = p/(|q|B0) (m) for a kinetic energy (eV). */
-    public double gyroradius(double energyEv) {
-        return eps(energyEv) * length;
     }
 }

@@ -48,9 +48,4 @@ public record ScanDuration(double value, Unit unit) {
             throw new IllegalArgumentException("--duration must lie in (0, 1e6] " + unit.label + ", got " + value);
         }
     }
-
-    @Override
-    public String toString() {
-        return org.twinorbit.harness.Format.number(value) + " " + unit.label;
-    }
 }

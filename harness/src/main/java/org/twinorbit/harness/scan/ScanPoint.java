@@ -29,9 +29,4 @@ public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String
     public double worst(ScanMetric m) {
         return value(m.worstKey());
     }
-
-    /** The mean of a metric over the ensemble, NaN when not measured. */
-    public double mean(ScanMetric m) {
-        return value(m.meanKey());
-    }
 }

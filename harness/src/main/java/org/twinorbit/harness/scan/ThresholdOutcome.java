@@ -21,14 +21,4 @@ public enum ThresholdOutcome {
     public String label() {
         return label;
     }
-
-    /** The outcome with this label. @throws IllegalArgumentException for an unknown label */
-    public static ThresholdOutcome ofLabel(String label) {
-        for (ThresholdOutcome o : values()) {
-            if (o.label.equals(label)) {
-                return o;
-            }
-        }
-        throw new IllegalArgumentException("unknown threshold outcome '" + label + "'");
-    }
 }
