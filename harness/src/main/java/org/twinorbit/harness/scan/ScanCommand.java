@@ -9,7 +9,9 @@ import java.util.Map;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.shared.Species;
+import org.twinorbit.harness.ExecutionOptions;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -38,8 +40,8 @@ public final class ScanCommand implements Runnable {
                     + "--phases set the resolution.")
     boolean safeUse;
 
-    @Option(names = "--param", paramLabel = "NAME=VALUE",
-            description = "Field parameter override, repeatable (e.g. --param Rm=8).")
+    @Option(names = {"-P", "--field-param"}, paramLabel = "NAME=VALUE",
+            description = "Field parameter override, repeatable (e.g. -P Rm=8).")
     Map<String, Double> params = new LinkedHashMap<>();
 
     @Option(names = "--species", defaultValue = "proton", paramLabel = "NAME",
@@ -104,11 +106,8 @@ public final class ScanCommand implements Runnable {
     @Option(names = "--resume", description = "Take up the points saved by an interrupted scan with the same options in --out.")
     boolean resume;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    int threads = Runtime.getRuntime().availableProcessors();
-
-    @Option(names = "--quiet", description = "No progress bar.")
-    boolean quiet;
+    @Mixin
+    ExecutionOptions execution;
 
     @Spec
     CommandSpec spec;
@@ -122,7 +121,7 @@ public final class ScanCommand implements Runnable {
         ScanRequest.Built setup = setup();
         long t0 = System.nanoTime();
         ScanResult r;
-        if (quiet) {
+        if (execution.quiet()) {
             r = setup.scan().run(setup.evaluator(), out, resume, 1, ScanProgress.NONE);
         } else {
             try (ScanProgressBar bar = new ScanProgressBar("scan " + field)) {
@@ -139,9 +138,7 @@ public final class ScanCommand implements Runnable {
         if (field != null) {
             throw new IllegalArgumentException("--safe-use scans every field of the library; drop --field " + field);
         }
-        if (threads < 1) {
-            throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
-        }
+        int threads = execution.threads();
         if (points < 2 || phases < 1 || phases > 1024) {
             throw new IllegalArgumentException("--safe-use needs --points >= 2 and --phases in [1, 1024], got "
                     + points + " and " + phases);
@@ -149,7 +146,7 @@ public final class ScanCommand implements Runnable {
         long t0 = System.nanoTime();
         SafeUseMap.Resolution res = new SafeUseMap.Resolution(points, phases);
         SafeUseMap.Result r;
-        if (quiet) {
+        if (execution.quiet()) {
             r = SafeUseMap.run(out, res, resume, threads, ScanProgress.NONE);
         } else {
             try (ScanProgressBar bar = new ScanProgressBar("safe-use map")) {
@@ -164,9 +161,6 @@ public final class ScanCommand implements Runnable {
 
     /** Checks every option and builds the scan; no orbit is computed here. */
     ScanRequest.Built setup() {
-        if (threads < 1) {
-            throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
-        }
         ScanRequest q = new ScanRequest();
         q.field = field;
         q.parameters = new LinkedHashMap<>(params);
@@ -183,7 +177,7 @@ public final class ScanCommand implements Runnable {
         q.tolerances = tolerances();
         q.referenceRtol = referenceRtol;
         q.integrators = integrators;
-        q.threads = threads;
+        q.threads = execution.threads();
         return q.build();
     }
 

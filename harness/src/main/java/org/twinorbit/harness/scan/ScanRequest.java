@@ -51,7 +51,7 @@ public final class ScanRequest {
         }
         ScanField recipe = ScanField.of(field);
         if (recipe.timeScale() && parameters.containsKey(recipe.parameter())) {
-            throw new IllegalArgumentException("--param " + recipe.parameter() + ": the scan sets it from eps; "
+            throw new IllegalArgumentException("--field-param " + recipe.parameter() + ": the scan sets it from eps; "
                     + "choose the range with --eps-min and --eps-max instead");
         }
         double lo = epsMin != null ? epsMin : recipe.epsMin();

