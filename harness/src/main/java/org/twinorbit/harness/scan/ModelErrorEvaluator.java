@@ -89,8 +89,30 @@ public final class ModelErrorEvaluator implements PointEvaluator {
                 CaseSpec.DEFAULT_GC_STEP, rtol);
     }
 
+    /**
+     * {@inheritDoc}
+     *
+     * <p>A point whose particles cannot be placed (a ring reaching outside the domain, an E×B
+     * drift faster than light) has every error infinite, class change unknown, and
+     * {@code point_failed} = 1: the comparison itself breaks down there.
+     */
     @Override
     public Map<String, Double> measure(double eps, double energyEv, double pitchDeg) {
+        try {
+            return values(run(eps, energyEv, pitchDeg));
+        } catch (IllegalArgumentException cannotPlace) {
+            Map<String, Double> out = new LinkedHashMap<>();
+            for (ScanMetric m : ScanMetric.values()) {
+                double v = m == ScanMetric.CLASS_CHANGE ? Double.NaN : Double.POSITIVE_INFINITY;
+                out.put(m.meanKey(), v);
+                out.put(m.worstKey(), v);
+            }
+            out.put("point_failed", 1.0);
+            return out;
+        }
+    }
+
+    private CaseResult run(double eps, double energyEv, double pitchDeg) {
         CaseRunner runner = new CaseRunner(threads, true);
         CaseResult r;
         switch (duration.unit()) {
@@ -106,13 +128,14 @@ public final class ModelErrorEvaluator implements PointEvaluator {
                 }
             }
         }
-        return values(r);
+        return r;
     }
 
     private Map<String, Double> values(CaseResult r) {
         ResultRow model = r.rows().stream().filter(x -> x.errorKind().equals("model")).findFirst().orElseThrow();
         boolean failed = model.status().equals("model-failure") || model.status().equals("unstable");
         Map<String, Double> out = new LinkedHashMap<>();
+        out.put("point_failed", 0.0);
         for (ScanMetric m : ScanMetric.values()) {
             Stat s = switch (m) {
                 case CLASS_CHANGE -> new Stat(1 - model.classAgreement(), model.classAgreement() < 1 ? 1 : 0);

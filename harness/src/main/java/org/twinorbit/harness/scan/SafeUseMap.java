@@ -108,7 +108,14 @@ public final class SafeUseMap {
         List<Row> rows = new ArrayList<>();
         for (int i = 0; i < scans.size(); i++) {
             ScanRequest.Built b = scans.get(i);
-            ScanResult r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, 1, overall);
+            ScanResult r;
+            try {
+                r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, 1, overall);
+            } catch (IllegalArgumentException e) {
+                // one scan that cannot run does not sink the map; it is listed with the reason
+                skipped.put(names.get(i), "scan failed: " + e.getMessage());
+                continue;
+            }
             double[] eps = b.scan().eps();
             for (Threshold t : r.thresholds()) {
                 rows.add(new Row((String) r.settings().get("field"), (String) r.settings().get("species"),

@@ -69,7 +69,7 @@ public final class ScanCommand implements Runnable {
     Double energy;
 
     @Option(names = "--start", split = ",", paramLabel = "X,Y,Z",
-            description = "Initial guiding center in m (default: the field's; r = 0.2 Lm in the mirror's midplane).")
+            description = "Initial guiding center in m (default: the field's; r = 0.2 Lm in the mirror's midplane; r = 3 rho0 in the ramp).")
     List<Double> start;
 
     @Option(names = "--phases", defaultValue = "8", paramLabel = "N",

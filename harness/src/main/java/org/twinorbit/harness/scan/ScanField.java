@@ -3,6 +3,9 @@ package org.twinorbit.harness.scan;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import org.twinorbit.fields.Field;
+import org.twinorbit.shared.FieldSample;
+import org.twinorbit.shared.Relativity;
+import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
 /**
@@ -58,14 +61,22 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
      *     p_φ = m r u_φ + q r A_φ is fixed by μ alone, so μ cannot jump (Noether; common
      *     practice), and every gyrophase is the same orbit turned about the axis, which leaves the
      *     ensemble nothing to sample;
-     * <li>in the ramp, where the scan starts at r = 0.1 m (about 20 gyroradii of a 1 keV proton at
-     *     1 T) so that the inward E×B drift of the compression, v_E = r/(2(τ + t)), is not zero.
+     * <li>in the ramp, where the scan starts at r = 3 ρ0 so that the inward E×B drift of the
+     *     compression, v_E = r/(2(τ + t)), is not zero; at r = 3 ρ0 it is 1.5 ε v⊥ at the start,
+     *     below the particle's speed over most of the range.
      * </ul>
+     *
+     * @param energyEv the scan's kinetic energy (eV), used by the ramp
      */
-    public Vec3 start(String name, Field f) {
+    public Vec3 start(String name, Field f, Species species, double energyEv) {
         return switch (name) {
             case "mirror" -> new Vec3(0.2 * f.length(), 0, 0);
-            case "ramp" -> new Vec3(0.1, 0, 0);
+            case "ramp" -> {
+                FieldSample s = new FieldSample();
+                f.evaluate(0, 0, 0, 0, s);
+                yield new Vec3(3 * Relativity.momentumFromKinetic(species, energyEv)
+                        / (Math.abs(species.charge()) * s.bMag()), 0, 0);
+            }
             default -> f.defaultStart();
         };
     }

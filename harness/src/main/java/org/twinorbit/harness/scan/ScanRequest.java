@@ -150,7 +150,7 @@ public final class ScanRequest {
 
     private Vec3 start(Field f, ScanField recipe) {
         if (start == null) {
-            return recipe.start(field, f);
+            return recipe.start(field, f, species, energyEv != null ? energyEv : recipe.energyEv());
         }
         if (start.size() != 3 || start.stream().anyMatch(v -> v == null || !Double.isFinite(v))) {
             throw new IllegalArgumentException("--start needs three finite coordinates x,y,z in m, got " + start);
