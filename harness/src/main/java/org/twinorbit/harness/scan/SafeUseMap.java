@@ -223,6 +223,9 @@ public final class SafeUseMap {
                     .xAxisTitle("field").yAxisTitle("eps* at the default tolerance").build();
             c.getStyler().setDefaultSeriesRenderStyle(CategorySeries.CategorySeriesRenderStyle.Scatter);
             c.getStyler().setYAxisLogarithmic(true).setLegendPosition(Styler.LegendPosition.OutsideE);
+            // ε* spans about two decades: label every tick, and tilt the field names apart
+            c.getStyler().setYAxisLogarithmicDecadeOnly(false);
+            c.getStyler().setXAxisLabelRotation(30);
             boolean any = false;
             for (ScanMetric m : ScanMetric.values()) {
                 List<Double> ys = new ArrayList<>();

@@ -9,12 +9,13 @@ import me.tongfei.progressbar.ProgressBarBuilder;
  * A progress bar on stderr with the time left, estimated from the points computed in this run
  * only (points resumed from disk took no time now, so they do not enter the rate).
  */
-final class ScanProgressBar implements ScanProgress, AutoCloseable {
+public final class ScanProgressBar implements ScanProgress, AutoCloseable {
 
     private final String label;
     private ProgressBar bar;
 
-    ScanProgressBar(String label) {
+    /** @param label shown beside the bar */
+    public ScanProgressBar(String label) {
         this.label = label;
     }
 
