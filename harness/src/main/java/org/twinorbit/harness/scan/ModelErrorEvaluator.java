@@ -56,6 +56,9 @@ public final class ModelErrorEvaluator implements PointEvaluator {
     private final List<String> pushers;
     private final List<String> gcIntegrators;
     private final int threads;
+    /** Wall time (ns) spent in the full-orbit and guiding-center references, summed over threads. */
+    private final java.util.concurrent.atomic.LongAdder fullOrbitNanos = new java.util.concurrent.atomic.LongAdder();
+    private final java.util.concurrent.atomic.LongAdder guidingCenterNanos = new java.util.concurrent.atomic.LongAdder();
 
     /**
      * @param parameters    field parameter overrides (a time-scale scan sets its parameter per point)
@@ -148,7 +151,9 @@ public final class ModelErrorEvaluator implements PointEvaluator {
             out.put(m.worstKey(), infinite ? Double.POSITIVE_INFINITY : Math.abs(s.worst()));
         }
         for (ReferenceSummary ref : r.references()) {
-            String prefix = ref.model().equals("full-orbit") ? "full_orbit" : "guiding_center";
+            boolean fullOrbit = ref.model().equals("full-orbit");
+            (fullOrbit ? fullOrbitNanos : guidingCenterNanos).add((long) (ref.wallSeconds() * 1e9));
+            String prefix = fullOrbit ? "full_orbit" : "guiding_center";
             out.put(prefix + "_reference_error_rho", ref.selfErrorRho());
             out.put(prefix + "_evaluations", ref.fieldEvaluations());
         }
@@ -160,6 +165,15 @@ public final class ModelErrorEvaluator implements PointEvaluator {
             }
         }
         return out;
+    }
+
+    /**
+     * Wall time (s) spent so far in the full-orbit references and in the guiding-center
+     * references, each summed over threads: where a scan's time goes. Never written to the
+     * result files, which must not depend on the machine.
+     */
+    public double[] referenceSeconds() {
+        return new double[] {fullOrbitNanos.sum() * 1e-9, guidingCenterNanos.sum() * 1e-9};
     }
 
     private static Stat single(double v) {

@@ -130,7 +130,13 @@ public final class ScanCommand implements Runnable {
         }
         PrintWriter w = spec.commandLine().getOut();
         printSummary(w, r);
-        w.printf("wrote %s/scan.md, scan.csv, scan.json, scan.png in %.1f s%n", out, (System.nanoTime() - t0) * 1e-9);
+        if (setup.evaluator() instanceof ModelErrorEvaluator m) {
+            double[] s = m.referenceSeconds();
+            w.printf(java.util.Locale.ROOT, "time in the references (summed over threads): full orbit %.1f s, guiding "
+                    + "center %.1f s%n", s[0], s[1]);
+        }
+        w.printf(java.util.Locale.ROOT, "wrote %s/scan.md, scan.csv, scan.json, scan.png in %.1f s%n", out,
+                (System.nanoTime() - t0) * 1e-9);
         w.flush();
     }
 
