@@ -56,7 +56,16 @@ public final class ScanTables {
         sb.append("\nModel error: the guiding-center reference against the gyro-averaged full-orbit ")
                 .append("reference, both at tight tolerance; worst case over the gyrophase ensemble. ")
                 .append("eps* is the first eps (").append(r.axis().meaning())
-                .append(") whose worst-case error exceeds the tolerance, refined by log-log interpolation.\n\n");
+                .append(") whose worst-case error exceeds the tolerance, refined by log-log interpolation.\n\n")
+                .append("Reading the numbers: `_worst` is the largest magnitude over the ensemble, `_mean` the mean ")
+                .append("(signed for bounce_period_error). The particles are placed at zeroth order around one guiding ")
+                .append("center, so each phase starts with an O(eps) gyrophase-dependent offset; in a bouncing orbit it ")
+                .append("shifts the bounce period and, over several bounces, the position along the field line, which ")
+                .append("is why bounce_period_error and position_error_rho can grow like eps (or stay near a few rho0) ")
+                .append("while their signed ensemble mean is far smaller. `inf` marks a point where the guiding ")
+                .append("center failed or the particles could not be placed (`point_failed` = 1). ")
+                .append("`*_reference_error_rho` is each reference's self-estimated error (a run at 100 times tighter ")
+                .append("tolerance), `*_evaluations` its field evaluations per orbit.\n\n");
         sb.append("## Thresholds\n\n");
         String derived = r.axis().derivedName();
         sb.append("| metric | tolerance | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
