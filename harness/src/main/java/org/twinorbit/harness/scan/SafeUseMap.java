@@ -144,7 +144,11 @@ public final class SafeUseMap {
                 .append("that metric. `not-reached`: safe over the whole range scanned; `exceeded-at-start`: not safe ")
                 .append("even at the smallest eps scanned; `no-data`: the metric does not apply (no bounce, no drift). ")
                 .append("Tolerances: mu_jump 1 %, drift_error 5 %, position_error_rho 1 rho0, ")
-                .append("bounce_period_error 1 %, class_change 0 (any orbit trapped in one model and lost in the other).\n\n");
+                .append("bounce_period_error 1 %, class_change 0 (any orbit trapped in one model and lost in the other).\n\n")
+                .append("In a static magnetic field the shape of an orbit depends on p/(qB) alone, relativistic or ")
+                .append("not, so eps* depends on the species only through the sign of its charge: protons and electrons ")
+                .append("agree wherever the field looks the same to both signs, and only the energy at eps* differs. ")
+                .append("The tokamak, where the drift direction relative to the poloidal field matters, is the exception.\n\n");
         sb.append("| field | species | metric | eps | pitch (deg) | range scanned | outcome | eps* | energy at eps* (eV) |\n");
         sb.append("|---|---|---|---|---|---|---|---|---|\n");
         for (Row row : r.rows()) {

@@ -61,7 +61,8 @@ public final class ScanPlot {
         List<ScanPoint> pts = r.points();
         double epsMin = pts.stream().mapToDouble(ScanPoint::eps).min().orElse(Double.NaN);
         double epsMax = pts.stream().mapToDouble(ScanPoint::eps).max().orElse(Double.NaN);
-        String xTitle = "eps = " + r.axis().meaning();
+        String xTitle = "eps = " + r.axis().meaning()
+                + (r.axis().derivedName() != null ? ", " + r.axis().derivedName() + " = eps^-1/2" : "");
         if (r.axis().variesEnergy()) {
             xTitle += "   (" + Format.number(r.axis().energyEv().applyAsDouble(epsMin)) + " to "
                     + Format.number(r.axis().energyEv().applyAsDouble(epsMax)) + " eV)";
