@@ -21,13 +21,13 @@ import picocli.CommandLine.Spec;
  * against ε over a log-spaced range, ε* per metric and tolerance, and the energy it reads as.
  */
 @Command(name = "scan", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {
-            "Breakdown scan: the model error of the guiding-center approximation (guiding-center",
-            "reference against the gyro-averaged full-orbit reference, worst case over a gyrophase",
-            "ensemble) against eps = rho0/L, varied through the energy at a fixed field (ramp and",
-            "wave scan 1/(Omega tau) and omega/Omega at a fixed energy). For each metric and",
-            "tolerance, eps* is the first eps whose error exceeds it, refined by log-log",
-            "interpolation. Writes scan.md, scan.csv, scan.json and scan.png into --out."})
+        description = "Breakdown scan: the model error of the guiding-center approximation (guiding-center "
+                + "reference against the gyro-averaged full-orbit reference, worst case over a gyrophase ensemble) "
+                + "against eps = rho0/L, varied through the energy at a fixed field (ramp and wave scan "
+                + "1/(Omega tau) and omega/Omega at a fixed energy). For each metric and tolerance, eps* is the "
+                + "first eps whose error exceeds it, refined by log-log interpolation. Writes scan.md, scan.csv, "
+                + "scan.json and scan.png into --out; saves every finished point so that --resume can go on "
+                + "after an interruption.")
 public final class ScanCommand implements Runnable {
 
     @Option(names = "--field", paramLabel = "NAME",
@@ -68,7 +68,7 @@ public final class ScanCommand implements Runnable {
             description = "Fixed kinetic energy in eV of a ramp or wave scan (default: per field).")
     Double energy;
 
-    @Option(names = "--start", split = ",", paramLabel = "X,Y,Z",
+    @Option(names = "--start", split = ",", paramLabel = "X,Y,Z", hideParamSyntax = true,
             description = "Initial guiding center in m (default: the field's; r = 0.2 Lm in the mirror's midplane; r = 3 rho0 in the ramp).")
     List<Double> start;
 
@@ -84,8 +84,8 @@ public final class ScanCommand implements Runnable {
     String durationUnit;
 
     @Option(names = "--tolerance", paramLabel = "METRIC=TOL[,TOL...]",
-            description = "Tolerance(s) of a metric at which eps* is found, repeatable; metrics: mu_jump (1%), "
-                    + "drift_error (5%), position_error_rho (1 rho0), bounce_period_error (1%), class_change (0). "
+            description = "Tolerance(s) of a metric at which eps* is found, repeatable; metrics: mu_jump (1%%), "
+                    + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0). "
                     + "Metrics not named keep their default.")
     Map<String, String> tolerances = new LinkedHashMap<>();
 
