@@ -18,7 +18,8 @@ import org.twinorbit.harness.Format;
 /**
  * The scan plot (PNG): one log-log panel per thresholded metric, the worst case over the
  * gyrophase ensemble against ε for every pitch angle (the μ panel shows mu_change beside
- * mu_jump), the tolerance as a dashed line, errors more than eight decades below it left out, ε* as a marker whose legend entry gives ε* and the
+ * mu_jump; with --integrators, their own discretisation errors of μ and position beside the model
+ * error), the tolerance as a dashed line, errors more than eight decades below it left out, ε* as a marker whose legend entry gives ε* and the
  * energy there, and the energy range of the scan in the axis title.
  */
 public final class ScanPlot {
@@ -76,10 +77,18 @@ public final class ScanPlot {
         boolean any = false;
         List<Double> pitches = pts.stream().map(ScanPoint::pitchDeg).distinct().toList();
         for (double pitch : pitches) {
-            any |= curve(c, pts, pitch, m, floor, m.key() + " @ " + Format.number(pitch) + " deg", SeriesLines.SOLID);
+            String at = " @ " + Format.number(pitch) + " deg";
+            any |= curve(c, pts, pitch, m.worstKey(), floor, m.key() + at, SeriesLines.SOLID);
             if (m == ScanMetric.MU_JUMP) {
-                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE, floor,
-                        "mu_change @ " + Format.number(pitch) + " deg", SeriesLines.DOT_DOT);
+                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE.worstKey(), floor, "mu_change" + at, SeriesLines.DOT_DOT);
+            }
+            // discretisation errors of the integrators scanned with --integrators, beside the model error
+            String own = m == ScanMetric.MU_JUMP ? "mu_change" : m == ScanMetric.POSITION_ERROR ? m.key() : null;
+            if (own != null && r.settings().get("integrators") instanceof List<?> names) {
+                for (Object name : names) {
+                    curve(c, pts, pitch, name + "_" + own + "_worst", floor, name + " " + own + " (discretisation)" + at,
+                            SeriesLines.DASH_DOT);
+                }
             }
         }
         if (!any) {
@@ -125,13 +134,13 @@ public final class ScanPlot {
         return Double.isNaN(tol) ? 0 : tol * 1e-8;
     }
 
-    /** Adds the finite worst-case values above {@code floor} of one metric at one pitch; false if none. */
-    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, ScanMetric m, double floor,
+    /** Adds the finite values above {@code floor} under {@code key} at one pitch; false if none. */
+    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, String key, double floor,
                                  String name, java.awt.BasicStroke line) {
         List<Double> xs = new ArrayList<>();
         List<Double> ys = new ArrayList<>();
         for (ScanPoint p : pts) {
-            double v = p.worst(m);
+            double v = p.value(key);
             if (p.pitchDeg() == pitch && v > floor && v > 0 && Double.isFinite(v)) {
                 xs.add(p.eps());
                 ys.add(v);
