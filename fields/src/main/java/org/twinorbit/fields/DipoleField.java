@@ -12,7 +12,6 @@ import org.twinorbit.shared.Vec3;
  */
 public final class DipoleField implements Field {
 
-    private final double bs;
     private final double rp;
     private final double lshell;
     /** B_s R_p³ (T m³). */
@@ -25,7 +24,6 @@ public final class DipoleField implements Field {
      * @param lshell equatorial start distance in planet radii, &gt; 1
      */
     public DipoleField(double bs, double rp, double lshell) {
-        this.bs = bs;
         this.rp = rp;
         this.lshell = lshell;
         this.k = bs * rp * rp * rp;
@@ -87,11 +85,6 @@ public final class DipoleField implements Field {
 
     @Override public List<Invariant> invariants() { return invariants; }
     @Override public Vec3 defaultStart() { return new Vec3(lshell * rp, 0, 0); }
-
-    /** Equatorial surface field B_s (T). */
-    public double surfaceField() {
-        return bs;
-    }
 
     /** The library entry. */
     public static final class Provider implements FieldProvider {

@@ -37,7 +37,7 @@ public final class RampField implements Field {
 
     @Override public String name() { return "ramp"; }
 
-    /** B(t) (T). */
+    /** The field strength B(t) (T) at time t (s). */
     public double strength(double t) {
         return b0 * (1.0 + t / tau);
     }

@@ -81,17 +81,16 @@ public final class TokamakField implements Field {
         out.dB[8] = gz * ratio;
     }
 
-    /** Poloidal flux per radian ψ(r) (T m²) for s = r² (m²). */
+    /**
+     * Poloidal flux per radian ψ(r) (T m²).
+     *
+     * @param s the squared minor radius r² (m²)
+     */
     public double psi(double s) {
         if (k == 0) {
             return b0 * s / (2.0 * q0);
         }
         return b0 / (2.0 * k) * Math.log1p(k * s / q0);
-    }
-
-    /** Safety factor q(r) for minor radius r (m). */
-    public double safetyFactor(double r) {
-        return q0 + k * r * r;
     }
 
     @Override public double length() { return r0; }

@@ -130,7 +130,7 @@ final class FieldCases {
         p.add(new double[] {0, 0, r0 + 1e-6, 1e-6});           // next to it
         p.add(new double[] {0, r0 + 0.999 * a, 0, 0});         // at the wall, outboard
         p.add(new double[] {0, -(r0 - 0.999 * a), 0, 0});      // inboard
-        p.add(new double[] {0, 0.3, r0, 0.999 * a});           // top
+        p.add(new double[] {0, 0, r0, 0.999 * a});             // top
         return new Case("tokamak", make("tokamak"), p, q -> a);
     }
 
@@ -140,7 +140,8 @@ final class FieldCases {
         p.add(new double[] {0, 0, 0, 0});
         p.add(new double[] {0, 3 * d, 0, 1e-3 * d});
         p.add(new double[] {0, 0, 0, 25 * d});     // deep in the lobe: sech² ~ 1e-21
-        return new Case("current-sheet", make("current-sheet"), p, q -> d);
+        // B varies over δ, but its direction turns over R_c = δ Bn/B0 = δ/10 at the centre
+        return new Case("current-sheet", make("current-sheet"), p, q -> d * 2e-9 / 20e-9);
     }
 
     private static Case shear() {

@@ -6,7 +6,7 @@ import org.twinorbit.shared.FieldSample;
 /**
  * The non-relativistic Boris pusher (γ = 1, u = v): half electric kick, rotation about B by
  * 2·atan(Ω Δt / 2), half kick (J. P. Boris, Proc. 4th Conf. Numerical Simulation of Plasmas,
- * 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics via Computer Simulation, 1991, §4-4).
+ * 1970; C. K. Birdsall & A. B. Langdon, Plasma Physics via Computer Simulation, 1991, §4-4, section from memory).
  * The fast path for particles far below the speed of light. Volume-preserving (H. Qin et al.,
  * Phys. Plasmas 20, 084503, 2013) and time-reversible.
  */
@@ -35,7 +35,12 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
     static final class Update extends LeapfrogUpdate {
 
         Update(boolean electric) {
-            super(electric);
+            super(electric, false);
+        }
+
+        @Override
+        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+            return 1.0;
         }
 
         @Override
@@ -52,26 +57,6 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
                 uz += h * f.ez;
             }
             return 1.0;
-        }
-
-        @Override
-        void firstHalf(FieldSample f, double h) {
-            if (electric) {
-                ux += h * f.ex;
-                uy += h * f.ey;
-                uz += h * f.ez;
-            }
-            rotateHalf(h * f.bx, h * f.by, h * f.bz, 1);
-        }
-
-        @Override
-        void undoFirstHalf(FieldSample f, double h) {
-            rotateHalf(h * f.bx, h * f.by, h * f.bz, -1);
-            if (electric) {
-                ux -= h * f.ex;
-                uy -= h * f.ey;
-                uz -= h * f.ez;
-            }
         }
     }
 }

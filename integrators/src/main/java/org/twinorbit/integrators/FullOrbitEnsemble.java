@@ -19,6 +19,8 @@ public abstract class FullOrbitEnsemble extends EnsembleStepper {
     /** q/m (C/kg). */
     final double qm;
     final byte[] state;
+    /** Time (s) of the state a particle was frozen at. */
+    private final double[] stoppedAt;
     long steps;
     long evaluations;
     private double t0;
@@ -37,6 +39,18 @@ public abstract class FullOrbitEnsemble extends EnsembleStepper {
         this.qm = species.chargeToMass();
         this.h = 0.5 * qm * dt;
         this.state = new byte[n];
+        this.stoppedAt = new double[n];
+    }
+
+    /** Freezes particle i at its current (last good) state, at time t (s). */
+    final void freeze(int i, byte why, double t) {
+        state[i] = why;
+        stoppedAt[i] = t;
+    }
+
+    /** Time (s) of particle i's state: the ensemble's time, or when it was frozen. */
+    public final double time(int i) {
+        return state[i] == RUNNING ? time() : stoppedAt[i];
     }
 
     /** Resets time, counters and statuses. @param t0 start time (s) */
@@ -70,7 +84,7 @@ public abstract class FullOrbitEnsemble extends EnsembleStepper {
         return evaluations;
     }
 
-    /** How particle i stands: OK while it is being pushed, LOST or UNSTABLE once frozen. */
+    /** How particle i stands: OK while it is being pushed, LOST or UNSTABLE once frozen at {@link #time(int)}. */
     public final OrbitStatus status(int i) {
         return switch (state[i]) {
             case RUNNING -> OrbitStatus.OK;
@@ -79,6 +93,6 @@ public abstract class FullOrbitEnsemble extends EnsembleStepper {
         };
     }
 
-    /** u = γv (m/s) of particle i synchronised to its position at {@link #time()}, into out. */
+    /** u = γv (m/s) of particle i synchronised to its position at {@link #time(int)}, into out. */
     public abstract void velocity(int i, double[] out);
 }

@@ -20,7 +20,7 @@ import org.twinorbit.shared.Vec3;
  * The full-orbit reference: the Lorentz equations in (x, u = γv) integrated by the adaptive
  * Dormand–Prince 8(5,3) method of Commons Math (J. R. Dormand & P. J. Prince, J. Comput. Appl.
  * Math. 6, 19, 1980; E. Hairer, S. P. Nørsett & G. Wanner, Solving Ordinary Differential
- * Equations I, 1993, §II.10) at a tight tolerance, with dense output sampled at a fixed interval,
+ * Equations I, 1993, §II.10, section from memory) at a tight tolerance, with dense output sampled at a fixed interval,
  * an event that stops the run where the particle leaves the field's domain (status LOST at the
  * crossing time), and an estimate of its own error from the same run at a 100× tighter
  * tolerance.
@@ -80,7 +80,9 @@ public final class FullOrbitReference {
 
     /**
      * The reference's estimate of its own error: the final-state difference to the same run at a
-     * 100× tighter tolerance (clamped at {@link #TIGHTEST_RELATIVE_TOLERANCE}).
+     * 100× tighter tolerance (clamped at {@link #TIGHTEST_RELATIVE_TOLERANCE}). It is honest when
+     * the tighter run is much more accurate, i.e. while the tolerance is well above round-off; at
+     * the tightest tolerance both runs are the same and the estimate is zero, which says nothing.
      *
      * @param result        the run at this reference's tolerance
      * @param tighter       the same run at the tighter tolerance

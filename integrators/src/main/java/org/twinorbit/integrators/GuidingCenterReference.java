@@ -2,6 +2,7 @@ package org.twinorbit.integrators;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.events.EventHandler;
@@ -184,8 +185,9 @@ public final class GuidingCenterReference {
         double tStop;
         try {
             tStop = dp.integrate(ode, t0, y, tEnd, end);
-        } catch (MathIllegalStateException e) {
-            // step size underflow or too many evaluations: a singularity the events did not catch
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            // step size underflow, too many evaluations or an unbracketed event: a singularity
+            // the events did not catch
             boolean failed = !(eq.parallelBStar(lastT[0], last) > 0.0);
             return result(failed ? OrbitStatus.MODEL_FAILURE : OrbitStatus.UNSTABLE, lastT[0], last,
                     evalsAtStart, mirrors);

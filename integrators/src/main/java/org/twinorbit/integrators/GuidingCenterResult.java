@@ -24,6 +24,20 @@ public record GuidingCenterResult(OrbitStatus status, double endTime, Vec3 posit
     }
 
     /**
+     * Mean bounce period (s): the time between the first mirror point and the last one at the
+     * same end of the orbit (every second mirror point), divided by the bounces between them;
+     * NaN with fewer than three mirror points.
+     */
+    public double bouncePeriod() {
+        int n = mirrorPoints.size();
+        if (n < 3) {
+            return Double.NaN;
+        }
+        int last = (n - 1) % 2 == 0 ? n - 1 : n - 2;
+        return (mirrorPoints.get(last).time() - mirrorPoints.get(0).time()) / (last / 2);
+    }
+
+    /**
      * A mirror point, where p∥ changes sign.
      *
      * @param time          (s)

@@ -49,35 +49,30 @@ public final class GyroMaps {
         FieldSample f = new FieldSample();
         double[] gc = x.clone();
         double[] b = new double[3];
-        double[] up = new double[3];
         double[] v = new double[3];
-        double[] next = new double[3];
+        double[] w = new double[3];
+        double[] up = new double[3];
         double scale = norm(x);
         double lastChange = Double.POSITIVE_INFINITY;
         for (int it = 0; it < MAX_ITERATIONS; it++) {
-            double bMag = frame(field, t, gc, f, b, inDriftFrame, v);
-            boost(u, -v[0], -v[1], -v[2], up);
-            double uPar = dot(up, b);
-            double[] uPerp = {up[0] - uPar * b[0], up[1] - uPar * b[1], up[2] - uPar * b[2]};
+            double bMag = split(field, t, gc, u, inDriftFrame, f, b, v, up, w);
             double k = s.mass() / (s.charge() * bMag);
-            next[0] = x[0] - k * (b[1] * uPerp[2] - b[2] * uPerp[1]);
-            next[1] = x[1] - k * (b[2] * uPerp[0] - b[0] * uPerp[2]);
-            next[2] = x[2] - k * (b[0] * uPerp[1] - b[1] * uPerp[0]);
+            double[] next = {
+                    x[0] - k * (b[1] * w[2] - b[2] * w[1]),
+                    x[1] - k * (b[2] * w[0] - b[0] * w[2]),
+                    x[2] - k * (b[0] * w[1] - b[1] * w[0])};
             double change = Math.sqrt(sq(next[0] - gc[0]) + sq(next[1] - gc[1]) + sq(next[2] - gc[2]));
             System.arraycopy(next, 0, gc, 0, 3);
-            double ringScale = Math.abs(k) * norm(uPerp);
-            if (change <= 1e-15 * (scale + ringScale) || (change >= lastChange && change <= 1e-12 * (scale + ringScale))) {
-                // converged (or stalled at rounding level): one final split at the fixed point
-                bMag = frame(field, t, gc, f, b, inDriftFrame, v);
-                boost(u, -v[0], -v[1], -v[2], up);
-                uPar = dot(up, b);
-                double[] w = {up[0] - uPar * b[0], up[1] - uPar * b[1], up[2] - uPar * b[2]};
+            double size = scale + Math.abs(k) * norm(w);
+            // converged, or stalled at the rounding level of the position
+            if (change <= 1e-15 * size || (change >= lastChange && change <= 1e-12 * size)) {
+                bMag = split(field, t, gc, u, inDriftFrame, f, b, v, up, w);
                 double[] e1 = new double[3];
                 double[] e2 = new double[3];
                 perpendicularBasis(b, e1, e2);
                 double theta = Math.atan2(dot(w, e2), dot(w, e1));
                 double mu = s.mass() * dot(w, w) / (2.0 * bMag);
-                return new GuidingCenterState(Vec3.of(gc), s.mass() * uPar, mu, theta);
+                return new GuidingCenterState(Vec3.of(gc), s.mass() * dot(up, b), mu, theta);
             }
             lastChange = change;
         }
@@ -198,6 +193,21 @@ public final class GyroMaps {
         out[0] = uPrime[0] + a * nx;
         out[1] = uPrime[1] + a * ny;
         out[2] = uPrime[2] + a * nz;
+    }
+
+    /**
+     * Fields at X, then u boosted into the drift frame (u' into {@code up}) and split: writes b,
+     * v_E and u'⊥ (into {@code w}); returns |B| (T).
+     */
+    private static double split(Field field, double t, double[] xg, double[] u, boolean inDriftFrame,
+                                FieldSample f, double[] b, double[] v, double[] up, double[] w) {
+        double bMag = frame(field, t, xg, f, b, inDriftFrame, v);
+        boost(u, -v[0], -v[1], -v[2], up);
+        double uPar = dot(up, b);
+        for (int i = 0; i < 3; i++) {
+            w[i] = up[i] - uPar * b[i];
+        }
+        return bMag;
     }
 
     /** Evaluates the field at X, writes b and (when wanted) v_E = E×B/|B|²; returns |B| (T). */

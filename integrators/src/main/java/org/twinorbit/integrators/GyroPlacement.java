@@ -12,7 +12,9 @@ public enum GyroPlacement {
     /**
      * {@link #ZEROTH_EXB} plus the magnetic (grad-B and curvature) drift velocity, with the
      * gyration speed reduced so that the kinetic energy in the drift frame is unchanged: adding
-     * drifts at fixed μ and p∥ would change the energy at O(ε).
+     * drifts at fixed μ and p∥ would change the energy at O(ε). The particle velocity is
+     * u∥ b + a(θ) ê(θ) + u_d with a = −ê·u_d + sqrt((ê·u_d)² + u⊥² − u_d²), so over evenly spaced
+     * phases the ensemble's mean velocity carries half of u_d (the ring is reshaped by the rest).
      */
     FIRST_ORDER_ENERGY_KEPT
 }

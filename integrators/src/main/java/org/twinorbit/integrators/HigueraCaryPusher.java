@@ -11,7 +11,7 @@ import org.twinorbit.shared.FieldSample;
  *
  * <p>The paper writes the rotation as u⁺ = s[u⁻ + (u⁻·t)t + u⁻×t], then u⁺ + u⁺×t; that is the
  * same rotation (both solve u_new − u⁻ = (u_new + u⁻)×t) as Boris's two cross products, which
- * are used here. Like Boris it splits into two exact halves (half kick + half rotation).
+ * are used here.
  */
 public final class HigueraCaryPusher extends LeapfrogPusher {
 
@@ -38,13 +38,13 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
     static final class Update extends LeapfrogUpdate {
 
         Update(boolean electric) {
-            super(electric);
+            super(electric, true);
         }
 
-        /** 1/γ at which Higuera & Cary rotate, from u⁻ (the current u) and τ = h B. */
-        private double rotationInverseGamma(double tx, double ty, double tz) {
-            return implicitInverseGamma(ux * ux + uy * uy + uz * uz, ux * tx + uy * ty + uz * tz,
-                    tx * tx + ty * ty + tz * tz);
+        /** Higuera &amp; Cary rotate at the γ solved from u⁻ and τ = h B (their eq. for γ_new). */
+        @Override
+        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+            return implicitInverseGamma(u2, uDotTau, tau2);
         }
 
         private void kick(FieldSample f, double h) {
@@ -59,33 +59,14 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
                 kick(f, h);
             }
             double tx = h * f.bx, ty = h * f.by, tz = h * f.bz;
-            double k = rotationInverseGamma(tx, ty, tz);
+            double u2 = ux * ux + uy * uy + uz * uz;
+            double k = rotationInverseGamma(u2, ux * tx + uy * ty + uz * tz, tx * tx + ty * ty + tz * tz);
             rotate(k * tx, k * ty, k * tz);
-            if (electric) {
-                kick(f, h);
+            if (!electric) {
+                return 1.0 / Math.sqrt(1.0 + u2 * INV_C2); // the rotation keeps |u|
             }
+            kick(f, h);
             return inverseGamma();
-        }
-
-        @Override
-        void firstHalf(FieldSample f, double h) {
-            if (electric) {
-                kick(f, h);
-            }
-            double tx = h * f.bx, ty = h * f.by, tz = h * f.bz;
-            double k = rotationInverseGamma(tx, ty, tz);
-            rotateHalf(k * tx, k * ty, k * tz, 1);
-        }
-
-        @Override
-        void undoFirstHalf(FieldSample f, double h) {
-            // the rotation keeps |u| and u·B, so its Lorentz factor is the same from either end
-            double tx = h * f.bx, ty = h * f.by, tz = h * f.bz;
-            double k = rotationInverseGamma(tx, ty, tz);
-            rotateHalf(k * tx, k * ty, k * tz, -1);
-            if (electric) {
-                kick(f, -h);
-            }
         }
     }
 }

@@ -136,6 +136,16 @@ public final class InitialCondition {
         return Gyration.period(species, bMag, gamma());
     }
 
+    /** Speed |v| (m/s). */
+    public double speed() {
+        return momentum() / (gamma() * species.mass());
+    }
+
+    /** Transit time L/|v| (s) over the field's length; +∞ for a field without one. */
+    public double transitTime() {
+        return field.length() / speed();
+    }
+
     /** p∥ = p cos α (kg m/s). */
     public double parallelMomentum() {
         return momentum() * Math.cos(Math.toRadians(pitchDeg));

@@ -51,11 +51,11 @@ final class LeapfrogEnsemble extends FullOrbitEnsemble {
             double g = up.push(f, h) * dt;
             double nx = xi + up.ux * g, ny = yi + up.uy * g, nz = zi + up.uz * g;
             if (!field.inDomain(nx, ny, nz)) {
-                state[i] = LOST;
+                freeze(i, LOST, t);
                 continue;
             }
             if (!Double.isFinite(nx + ny + nz + up.ux + up.uy + up.uz)) {
-                state[i] = UNSTABLE;
+                freeze(i, UNSTABLE, t);
                 continue;
             }
             x[i] = nx;
@@ -80,7 +80,7 @@ final class LeapfrogEnsemble extends FullOrbitEnsemble {
 
     /** Evaluates the field at particle i (at the current time) and loads its u into the update. */
     private void load(int i) {
-        field.evaluate(time(), x[i], y[i], z[i], sample);
+        field.evaluate(time(i), x[i], y[i], z[i], sample);
         evaluations++;
         update.ux = ux[i];
         update.uy = uy[i];

@@ -97,7 +97,9 @@ final class LeapfrogStepper implements FullOrbitStepper {
         update.ux = ux0;
         update.uy = uy0;
         update.uz = uz0;
-        evaluate();
+        if (why == OrbitStatus.UNSTABLE) {
+            evaluate(); // the sample was overwritten at the bad position
+        }
         status = why;
         return false;
     }

@@ -23,9 +23,12 @@ abstract class LeapfrogUpdate {
 
     /** False when the field has no E anywhere: every kick is skipped. */
     final boolean electric;
+    /** False for a scheme that sets γ = 1 (then u = v). */
+    final boolean relativistic;
 
-    LeapfrogUpdate(boolean electric) {
+    LeapfrogUpdate(boolean electric, boolean relativistic) {
         this.electric = electric;
+        this.relativistic = relativistic;
     }
 
     /**
@@ -37,23 +40,90 @@ abstract class LeapfrogUpdate {
     abstract double push(FieldSample f, double h);
 
     /**
-     * Advances u by the first half of {@link #push} (from t − Δt/2 to t): used to synchronise
-     * the velocity with the position. The default runs the scheme itself over Δt/2; a scheme
-     * that factors into two exact halves overrides it with its first half.
+     * 1/γ at which the scheme rotates a vector u in the magnetic field, from quantities a
+     * rotation about B leaves unchanged.
+     *
+     * @param u2      |u|² (m²/s²)
+     * @param uDotTau u·τ (m/s), τ = h B
+     * @param tau2    |τ|²
+     */
+    abstract double rotationInverseGamma(double u2, double uDotTau, double tau2);
+
+    /**
+     * Advances u from t − Δt/2 to t, synchronising it with the position: half the scheme's
+     * rotation in the frame drifting at E×B/B², plus half the kick of E along B. In uniform
+     * fields this is exactly half a step of the scheme (applied twice it gives {@link #push};
+     * Boris non-relativistically, and any scheme for a particle at rest in the drift frame); in
+     * a pure magnetic field it is the half rotation. Where E⊥ ≥ cB there is no drift frame and
+     * it falls back to half kick + half rotation. Rotating in the drift frame keeps the drift
+     * velocity exact; rotating u + hE instead would lengthen it by sqrt(1 + (Ω Δt/2)²).
      *
      * @param h q Δt / (2m) (s C/kg) of the full step
      */
-    void firstHalf(FieldSample f, double h) {
-        push(f, 0.5 * h);
+    final void firstHalf(FieldSample f, double h) {
+        halfStep(f, h, 1);
     }
 
     /**
-     * The inverse of {@link #firstHalf}: takes u at t back to t − Δt/2, the leapfrog start.
+     * The exact inverse of {@link #firstHalf}: takes u at t back to t − Δt/2, the leapfrog start.
      *
      * @param h q Δt / (2m) (s C/kg) of the full step
      */
-    void undoFirstHalf(FieldSample f, double h) {
-        push(f, -0.5 * h);
+    final void undoFirstHalf(FieldSample f, double h) {
+        halfStep(f, h, -1);
+    }
+
+    private void halfStep(FieldSample f, double h, int sign) {
+        double bx = f.bx, by = f.by, bz = f.bz;
+        double b2 = bx * bx + by * by + bz * bz;
+        double dx = 0, dy = 0, dz = 0; // u of the drift frame (m/s)
+        double kx = 0, ky = 0, kz = 0; // half kick (m/s)
+        if (electric) {
+            if (b2 > 0) {
+                double ex = f.ex, ey = f.ey, ez = f.ez;
+                double vx = (ey * bz - ez * by) / b2, vy = (ez * bx - ex * bz) / b2, vz = (ex * by - ey * bx) / b2;
+                double v2 = vx * vx + vy * vy + vz * vz;
+                double par = (ex * bx + ey * by + ez * bz) / b2;
+                double g = relativistic ? 1.0 - v2 * INV_C2 : 1.0;
+                if (g > 0) {
+                    g = 1.0 / Math.sqrt(g);
+                    dx = g * vx;
+                    dy = g * vy;
+                    dz = g * vz;
+                    kx = h * par * bx;
+                    ky = h * par * by;
+                    kz = h * par * bz;
+                } else {
+                    kx = h * ex;
+                    ky = h * ey;
+                    kz = h * ez;
+                }
+            } else {
+                kx = h * f.ex;
+                ky = h * f.ey;
+                kz = h * f.ez;
+            }
+        }
+        if (sign < 0) {
+            ux -= kx;
+            uy -= ky;
+            uz -= kz;
+        }
+        ux -= dx;
+        uy -= dy;
+        uz -= dz;
+        double tx = h * bx, ty = h * by, tz = h * bz;
+        double ig = rotationInverseGamma(ux * ux + uy * uy + uz * uz + dx * dx + dy * dy + dz * dz,
+                ux * tx + uy * ty + uz * tz, tx * tx + ty * ty + tz * tz);
+        rotateHalf(ig * tx, ig * ty, ig * tz, sign);
+        ux += dx;
+        uy += dy;
+        uz += dz;
+        if (sign > 0) {
+            ux += kx;
+            uy += ky;
+            uz += kz;
+        }
     }
 
     /**
@@ -81,12 +151,16 @@ abstract class LeapfrogUpdate {
 
     /**
      * Rotates u about t by the angle 2·atan(|t|) (the Boris rotation; Boris 1970, Birdsall &
-     * Langdon 1991, §4-4), in the two cross products of the published form.
+     * Langdon 1991, §4-4, section from memory), in the two cross products of the published form.
      *
      * @param tx rotation vector (dimensionless), the rotation is right-handed about −t
      */
     final void rotate(double tx, double ty, double tz) {
-        double f = 2.0 / (1.0 + tx * tx + ty * ty + tz * tz);
+        rotate(tx, ty, tz, 2.0 / (1.0 + tx * tx + ty * ty + tz * tz));
+    }
+
+    /** {@link #rotate(double, double, double)} with f = 2/(1 + |t|²) supplied by the caller. */
+    final void rotate(double tx, double ty, double tz, double f) {
         double sx = f * tx, sy = f * ty, sz = f * tz;
         double px = ux + (uy * tz - uz * ty);
         double py = uy + (uz * tx - ux * tz);

@@ -8,7 +8,7 @@ import org.twinorbit.shared.Species;
 /**
  * The Lorentz equations in the state y = (x, y, z, u_x, u_y, u_z) with u = γv:
  * dx/dt = u/γ, du/dt = (q/m)(E + u×B/γ), γ = sqrt(1 + u²/c²) (Jackson, Classical
- * Electrodynamics, 3rd ed., §12.1). One instance per thread: it owns the field sample it reuses.
+ * Electrodynamics, 3rd ed., §12.1, section from memory). One instance per thread: it owns the field sample it reuses.
  */
 final class LorentzEquations {
 

@@ -40,11 +40,11 @@ final class LorentzRk4Ensemble extends FullOrbitEnsemble {
             s[5] = uz[i];
             rk4.advance(t, dt, s);
             if (!field.inDomain(s[0], s[1], s[2])) {
-                state[i] = LOST;
+                freeze(i, LOST, t);
                 continue;
             }
             if (!Double.isFinite(s[0] + s[1] + s[2] + s[3] + s[4] + s[5])) {
-                state[i] = UNSTABLE;
+                freeze(i, UNSTABLE, t);
                 continue;
             }
             x[i] = s[0];

@@ -8,9 +8,9 @@ import org.twinorbit.shared.Species;
 /**
  * Classic fourth-order Runge–Kutta on the Lorentz equations in (x, u) (W. Kutta, Z. Math. Phys.
  * 46, 1901; E. Hairer, S. P. Nørsett & G. Wanner, Solving Ordinary Differential Equations I,
- * 1993, §II.1). Four field evaluations per step. Not symplectic: in a pure magnetic field it
+ * 1993, §II.1, section from memory). Four field evaluations per step. Not symplectic: in a pure magnetic field it
  * loses energy secularly, by about (Ω Δt)⁶/144 per step (the amplification factor of RK4 for
- * an oscillator; Hairer, Nørsett & Wanner §IV.2), which is the contrast to the leapfrog schemes.
+ * an oscillator; Hairer, Nørsett & Wanner §IV.2, section from memory), which is the contrast to the leapfrog schemes.
  */
 public final class LorentzRk4Pusher implements FullOrbitPusher {
 

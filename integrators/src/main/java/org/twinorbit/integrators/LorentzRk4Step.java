@@ -2,7 +2,7 @@ package org.twinorbit.integrators;
 
 /**
  * One classic fourth-order Runge–Kutta step (Kutta 1901; Hairer, Nørsett & Wanner, Solving
- * Ordinary Differential Equations I, 1993, §II.1) of the {@link LorentzEquations}, in place on a
+ * Ordinary Differential Equations I, 1993, §II.1, section from memory) of the {@link LorentzEquations}, in place on a
  * 6-component state with preallocated stage buffers.
  */
 final class LorentzRk4Step {

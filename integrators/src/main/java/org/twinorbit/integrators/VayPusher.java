@@ -6,12 +6,9 @@ import org.twinorbit.shared.FieldSample;
 /**
  * The Vay pusher: an explicit half step with the old velocity, then an implicit half step whose
  * Lorentz factor is solved in closed form, so that a particle moving at E×B/B² feels no force
- * (J.-L. Vay, Phys. Plasmas 15, 056701, 2008, eqs. 11-15). Time-reversible; not
+ * (J.-L. Vay, Phys. Plasmas 15, 056701, 2008). Time-reversible; not
  * volume-preserving (A. V. Higuera & J. R. Cary, Phys. Plasmas 24, 052104, 2017).
- *
- * <p>Vay's scheme does not split into a kick and a rotation, so the velocity is synchronised to
- * the position by the scheme itself over half a step; in a pure magnetic field that is a
- * rotation and keeps |u|.
+
  */
 public final class VayPusher extends LeapfrogPusher {
 
@@ -38,7 +35,13 @@ public final class VayPusher extends LeapfrogPusher {
     static final class Update extends LeapfrogUpdate {
 
         Update(boolean electric) {
-            super(electric);
+            super(electric, true);
+        }
+
+        /** In a pure magnetic field Vay's step is a rotation at the γ of u. */
+        @Override
+        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+            return 1.0 / Math.sqrt(1.0 + u2 * INV_C2);
         }
 
         @Override

@@ -42,7 +42,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * One step turns u by exactly 2·atan(q B Δt / (2γm)) in a uniform B, for any Δt (Birdsall &
-     * Langdon, Plasma Physics via Computer Simulation, 1991, §4-4; Qin et al., Phys. Plasmas 20,
+     * Langdon, Plasma Physics via Computer Simulation, 1991, §4-4, section from memory; Qin et al., Phys. Plasmas 20,
      * 084503, 2013), here summed over 20 gyrations.
      */
     @ParameterizedTest
@@ -110,7 +110,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * E×B drift, non-relativistic: the guiding center moves at E×B/B² (Jackson, Classical
-     * Electrodynamics, 3rd ed., §12.3). The step is chosen so that one discrete gyration is
+     * Electrodynamics, 3rd ed., §12.3, section from memory). The step is chosen so that one discrete gyration is
      * exactly 32 steps; over whole gyrations the gyration cancels and the mean velocity is the
      * drift.
      */
@@ -138,7 +138,31 @@ abstract class AbstractLeapfrogPusherTest {
     }
 
     /**
-     * E×B drift at v_E = c/2: the guiding center still moves at E×B/B² (Jackson §12.3, by a
+     * The synchronised velocity of a particle gyrating in crossed fields keeps its gyration speed
+     * |u − v_E| exactly (non-relativistic exact motion; Jackson §12.3, section from memory): the plain average of the
+     * two half-step velocities would be short by 1/sqrt(1 + (Ω Δt/2)²) = −3.7 % at 16 steps per
+     * gyration (DESIGN.md). At u ~ 1e4 m/s, γ − 1 ~ 1e-9 bounds what the relativistic schemes
+     * may differ.
+     */
+    @Test
+    void synchronisedVelocityKeepsGyrationSpeedInCrossedFields() {
+        double b = 1.0, e = 2e3;
+        FullOrbitStepper s = pusher().stepper(TestField.constant(0, 0, b, e, 0, 0), P, 2 * Math.PI * P.mass() / (P.charge() * b) / 16);
+        double[] u0 = {1e4, 0, 3e3}, u = new double[3];
+        double vE = -e / b;
+        s.start(0, new double[3], u0);
+        double w0 = Math.hypot(u0[0], u0[1] - vE), worst = 0;
+        for (int k = 0; k < 1000; k++) {
+            s.step();
+            s.velocity(u);
+            worst = Math.max(worst, Math.abs(Math.hypot(u[0], u[1] - vE) / w0 - 1));
+            assertEquals(u0[2], u[2], 1e-9 * u0[2]);
+        }
+        assertTrue(worst < 1e-9, "gyration speed changed by " + worst);
+    }
+
+    /**
+     * E×B drift at v_E = c/2: the guiding center still moves at E×B/B² (Jackson §12.3, section from memory, by a
      * Lorentz transformation to the frame where E vanishes), measured between same-phase
      * crossings (u_x rising through 0) located by cubic Hermite interpolation.
      */
@@ -161,7 +185,7 @@ abstract class AbstractLeapfrogPusherTest {
 
     /**
      * Uniform E from rest, no B: x(t) = (mc²/qE)(sqrt(1 + (qEt/mc)²) − 1) (Jackson, Classical
-     * Electrodynamics, 3rd ed., §12.3 problem / hyperbolic motion); non-relativistically
+     * Electrodynamics, 3rd ed., ch. 12, hyperbolic motion; section from memory); non-relativistically
      * x = qEt²/(2m), which leapfrog reproduces exactly at integer steps (common practice).
      */
     @Test
@@ -249,7 +273,7 @@ abstract class AbstractLeapfrogPusherTest {
     /**
      * Time-reversible: N steps forward, then N steps with −Δt from the mirrored staggering, come
      * back to the start (common practice for symmetric leapfrog schemes; Hairer, Lubich & Wanner,
-     * Geometric Numerical Integration, 2006, §V.1). Round-off only: ~N ε in units of ρ.
+     * Geometric Numerical Integration, 2006, §V.1, section from memory). Round-off only: ~N ε in units of ρ.
      */
     @Test
     void retracesItsOrbitBackwards() {
@@ -362,6 +386,23 @@ abstract class AbstractLeapfrogPusherTest {
         assertTrue(Math.abs(x[0]) < 1.0 && Math.abs(x[0]) > 0.98, "last good x = " + x[0]);
         assertEquals(k, s.steps());
         assertFalse(s.step());
+    }
+
+    /** In an ensemble a particle that leaves is frozen at its last good state and time; the others go on. */
+    @Test
+    void ensembleFreezesALostParticleOnly() {
+        FullOrbitEnsemble en = (FullOrbitEnsemble) pusher().ensemble(TestField.walled(1e-3, 1.0), P, 1e-8, 2);
+        en.ux[0] = 1e6; // ρ ≈ 10 m: reaches the wall at 1 m
+        en.ux[1] = 1e3; // ρ ≈ 1 cm: stays inside
+        en.start(0);
+        for (int k = 0; k < 2000; k++) {
+            en.step();
+        }
+        assertEquals(OrbitStatus.LOST, en.status(0));
+        assertEquals(OrbitStatus.OK, en.status(1));
+        assertTrue(en.time(0) < en.time() && en.time(0) > 0.9e-6, "stopped at " + en.time(0));
+        assertTrue(en.x[0] < 1.0 && en.x[0] > 0.98, "last good x = " + en.x[0]);
+        assertEquals(en.time(), en.time(1), 0.0);
     }
 
     /** A field turning NaN makes the run UNSTABLE with the last finite state kept. */

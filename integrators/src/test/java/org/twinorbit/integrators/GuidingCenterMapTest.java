@@ -110,6 +110,60 @@ class GuidingCenterMapTest {
         assertMessage(() -> InitialCondition.ofEpsilon(g, s, 0.1, 10, new Vec3(Double.NaN, 0, 0)), "start", "domain");
     }
 
+    @ParameterizedTest
+    @ValueSource(booleans = {true, false})
+    void driftFrameRoundTripIsExactEvenForRelativisticExB(boolean positive) {
+        // E0 = 0.6 c B0: v_E = 0.6 c, the boost is far from Galilean; round trip exact by construction
+        Species s = species(positive);
+        Field f = new org.twinorbit.fields.CrossedField(1.0, 0.6 * 299792458.0);
+        InitialCondition ic = InitialCondition.ofEnergy(f, s, 2e5, 70, new Vec3(0.1, 0, 0));
+        for (GyroParticle p : ic.particles(6, GyroPlacement.ZEROTH_EXB)) {
+            GuidingCenterState back = GyroMaps.toGuidingCenter(f, s, 0, p.position().toArray(), p.u().toArray(), true);
+            assertEquals(0, back.position().minus(ic.position()).norm(), 1e-13 * ic.gyroradius());
+            assertEquals(ic.mu(), back.mu(), 1e-12 * ic.mu());
+            assertEquals(ic.parallelMomentum(), back.parallelMomentum(), 1e-12 * ic.momentum());
+        }
+    }
+
+    @Test
+    void particleAtRestInTheDriftFrameMovesStraightAtExB() {
+        // a particle moving exactly at v_E = E×B/B² (E < cB) feels no force and goes straight
+        // (Vay, Phys. Plasmas 15, 056701, 2008); checked with the exact Lorentz equations
+        // (Commons Math DP853) at v_E = 0.6 c, where a Galilean placement would visibly curve
+        Species s = Species.ELECTRON;
+        double e0 = 0.6 * 299792458.0;
+        Field f = new org.twinorbit.fields.CrossedField(1.0, e0);
+        GyroParticle p = GyroMaps.toParticle(f, s, 0, new GuidingCenterState(Vec3.ZERO, 0, 0, 0), GyroPlacement.ZEROTH_EXB);
+        double g = 1 / Math.sqrt(1 - 0.36);
+        assertEquals(-g * 0.6 * 299792458.0, p.u().y(), 1e-9 * 299792458.0);
+        double[] y = {0, 0, 0, p.u().x(), p.u().y(), p.u().z()};
+        double t = 1e-9;
+        GcLorentzTestOrbit.advance(f, s, 0, t, y, 1e-12, 1.0);
+        assertEquals(-0.6 * 299792458.0 * t, y[1], 1e-9 * 0.6 * 299792458.0 * t);
+        assertEquals(0, y[0], 1e-9 * 0.6 * 299792458.0 * t);
+    }
+
+    @Test
+    void firstOrderPlacementKeepsTheKineticEnergy() {
+        // DESIGN.md: adding drifts at fixed μ, p∥ changes the energy at O(ε); the first-order
+        // placement rescales the gyration so the drift-frame kinetic energy is the requested one
+        Species s = Species.PROTON;
+        Field f = new org.twinorbit.fields.GradientField(1.0, 1.0);
+        InitialCondition ic = InitialCondition.ofEpsilon(f, s, 0.05, 60, Vec3.ZERO);
+        double vD = ic.mu() / (s.charge() * ic.gamma() * 1.0); // grad-B drift μ B0/(qγ B Lg), B = B0
+        double meanUy = 0;
+        for (GyroParticle p : ic.particles(8, GyroPlacement.FIRST_ORDER_ENERGY_KEPT)) {
+            assertEquals(ic.kineticEv(), Relativity.kineticFromU(s, p.u().norm()), 1e-12 * ic.kineticEv());
+            meanUy += p.u().y() / 8;
+        }
+        for (GyroParticle p : ic.particles(8, GyroPlacement.ZEROTH)) {
+            assertEquals(ic.kineticEv(), Relativity.kineticFromU(s, p.u().norm()), 1e-12 * ic.kineticEv());
+        }
+        // u = u∥ b + a(θ) ê + d with a = −ê·d + sqrt((ê·d)² + u⊥² − d²); averaged over evenly
+        // spaced θ, ⟨a ê⟩ = −d/2 + O(d²/u⊥), so the ensemble carries half the drift (derived here)
+        assertEquals(ic.gamma() * vD / 2, meanUy, 0.05 * vD);
+    }
+
     private static void assertMessage(org.junit.jupiter.api.function.Executable e, String... words) {
         IllegalArgumentException ex = assertThrows(IllegalArgumentException.class, e);
         for (String w : words) {

@@ -43,6 +43,7 @@ class GuidingCenterMirrorTest {
                     s.name(), measured / tb - 1);
             assertEquals(tb, measured, 1e-6 * tb); // the 1e-6
             assertEquals(tb / 4, mp.get(0).time(), 1e-6 * tb);
+            assertEquals(tb, r.bouncePeriod(), 1e-6 * tb);
             // mirror point where μB = W (non-relativistic form) i.e. p⊥² = p² there:
             // B_m = B0/sin²α (common practice)
             double bm = B0 / Math.pow(Math.sin(Math.toRadians(60)), 2);
