@@ -51,6 +51,8 @@ class FullOrbitConvergenceTest {
         // the reference must be far more accurate than the finest run
         assertTrue(ref.positionError() < 1e-3 * err[2], "reference error " + ref.positionError() + " vs " + err[2]);
         double p1 = Math.log(err[0] / err[1]) / Math.log(2), p2 = Math.log(err[1] / err[2]) / Math.log(2);
+        System.out.printf("%s in %s: errors %.3e %.3e %.3e rho, orders %.3f %.3f, reference %.1e%n",
+                pusher.name(), c.name(), err[0], err[1], err[2], p1, p2, ref.positionError());
         assertEquals(pusher.order(), p1, 0.15, "order from 32 -> 64 steps per gyration, errors " + err[0] + ", " + err[1]);
         assertEquals(pusher.order(), p2, 0.15, "order from 64 -> 128 steps per gyration, errors " + err[1] + ", " + err[2]);
     }
