@@ -73,7 +73,7 @@ public final class CaseOptions {
     Double gcStep;
 
     @Option(names = "--reference-rtol", paramLabel = "RTOL",
-            description = "Relative tolerance of both references, in [1e-13, 1e-6] (default 1e-10).")
+            description = "Relative tolerance of both references, in [1e-12, 1e-6] (default 1e-10).")
     Double referenceRtol;
 
     /** The options as a spec, entries not given left null. */

@@ -18,8 +18,8 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code twinorbit run}: one case, every chosen integrator, a metrics table. */
 @Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Run one case: every chosen full-orbit pusher and guiding-center integrator and both references",
-            "on a gyrophase ensemble; print the errors (discretisation and model error in separate rows)."})
+        description = "Run one case: every chosen full-orbit pusher and guiding-center integrator and both references "
+                + "on a gyrophase ensemble; print the errors, discretisation and model error in separate rows.")
 public final class RunCommand implements Callable<Integer> {
 
     @Mixin

@@ -17,8 +17,8 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code twinorbit suite}: the built-in validation suite into tables and plots. */
 @Command(name = "suite", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Run the built-in validation suite: every field of the library with its cases and every",
-            "integrator; write validation.md, validation.csv, validation.json and PNG plots."})
+        description = "Run the built-in validation suite (every field of the library with its cases, every integrator) "
+                + "and write validation.md, validation.csv, validation.json and PNG plots.")
 public final class SuiteCommand implements Callable<Integer> {
 
     @Option(names = "--quick", description = "The reduced suite for CI: one case per field, 4 gyrophases.")

@@ -64,6 +64,11 @@ public final class GuidingCenterRecorder implements GuidingCenterObserver {
         }
     }
 
+    /** True once the energy error passed {@link EnergyMonitor#BLOW_UP} or became NaN. */
+    public boolean blownUp() {
+        return energyDefined && started && !(maxError <= EnergyMonitor.BLOW_UP);
+    }
+
     public Track track() {
         return track;
     }

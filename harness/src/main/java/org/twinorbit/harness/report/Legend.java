@@ -15,5 +15,8 @@ final class Legend {
             err: mean perpendicular guiding-center velocity over whole periods against the reference, relative;
             pos err/rho: |X - X_ref| at the end over rho0; bounce err: bounce period / reference - 1; class:
             trapped, passing or lost; order: measured from dt, dt/2, dt/4; "—": not defined for this row.
+            The mu change and mu jump of an integrator row are its own; the model row carries those of the
+            exact (reference) full orbit, which the guiding-center model takes as constant, so the difference
+            between the two is the integrator's share.
             """;
 }

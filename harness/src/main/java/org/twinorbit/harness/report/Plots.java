@@ -27,6 +27,8 @@ public final class Plots {
     private static final int HEIGHT = 560;
     /** Magnitudes below this are drawn at it on log axes (round-off of a double). */
     private static final double LOG_FLOOR = 1e-17;
+    /** Points drawn per curve at most: more cannot be told apart at this size and only cost time. */
+    private static final int MAX_POINTS = 800;
 
     /**
      * The projection of the orbit overlay per field: the plane where the guiding-center motion
@@ -130,13 +132,19 @@ public final class Plots {
         if (n < 2) {
             return;
         }
-        double[] a = new double[n];
-        double[] b = new double[n];
-        for (int i = 0; i < n; i++) {
-            a[i] = coord(t, i, ax[0], tc);
-            b[i] = coord(t, i, ax[1], tc);
+        int stride = Math.max(1, (n + MAX_POINTS - 1) / MAX_POINTS);
+        int m = (n - 1) / stride + 2;
+        double[] a = new double[m];
+        double[] b = new double[m];
+        int j = 0;
+        for (int i = 0; i < n; i += stride) {
+            a[j] = coord(t, i, ax[0], tc);
+            b[j] = coord(t, i, ax[1], tc);
+            j++;
         }
-        line(c, name, a, b);
+        a[j] = coord(t, n - 1, ax[0], tc); // always end at the last sample
+        b[j] = coord(t, n - 1, ax[1], tc);
+        line(c, name, java.util.Arrays.copyOf(a, j + 1), java.util.Arrays.copyOf(b, j + 1));
     }
 
     private static double coord(Track t, int i, String axis, double tc) {
@@ -168,10 +176,28 @@ public final class Plots {
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setPlotBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setSeriesColors(PALETTE);
+        // solid thin grid lines, decades only on log axes: easier to read, and dashed strokes
+        // across the whole plot cost more time than the curves themselves
+        c.getStyler().setPlotGridLinesStroke(new java.awt.BasicStroke(0.6f));
+        c.getStyler().setPlotGridLinesColor(new java.awt.Color(0xdddddd));
+        c.getStyler().setXAxisLogarithmicDecadeOnly(true);
+        c.getStyler().setYAxisLogarithmicDecadeOnly(true);
         return c;
     }
 
     private static void line(XYChart c, String name, double[] x, double[] y) {
+        if (x.length > MAX_POINTS) {
+            int stride = (x.length + MAX_POINTS - 1) / MAX_POINTS;
+            int m = (x.length + stride - 1) / stride;
+            double[] tx = new double[m];
+            double[] ty = new double[m];
+            for (int i = 0; i < m; i++) {
+                tx[i] = x[i * stride];
+                ty[i] = y[i * stride];
+            }
+            x = tx;
+            y = ty;
+        }
         XYSeries s = c.addSeries(name, x, y);
         s.setMarker(SeriesMarkers.NONE);
         s.setLineWidth(1.2f);

@@ -21,10 +21,6 @@ public final class TextTable {
         return this;
     }
 
-    public boolean isEmpty() {
-        return rows.isEmpty();
-    }
-
     /** A Markdown pipe table; the first column left-aligned, the rest right-aligned. */
     public String markdown() {
         StringBuilder sb = new StringBuilder();

@@ -21,7 +21,7 @@ final class Assembly {
      * averaging window is taken as no drift at all, where a relative drift error means nothing
      * (uniform field, an orbit on a symmetry axis, a drift that reverses every half bounce).
      */
-    static final double DRIFT_FLOOR_RHO = 0.05;
+    static final double DRIFT_FLOOR_RHO = 0.005;
 
     /**
      * Convergence errors closer than this factor to the reference's own error are limited by the

@@ -107,6 +107,10 @@ public final class Orbits {
             }
             st.position(x);
             rec.observe(st.time(), x, st.parallelMomentum());
+            if (rec.blownUp()) {
+                status = OrbitStatus.UNSTABLE;
+                break;
+            }
         }
         Outcome o = new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0);
         return new GuidingCenterRecord(o, rec, x.clone(), st.time(), java.util.List.of());

@@ -25,6 +25,8 @@ public final class Parallel {
 
     /** Work that has lasted this long gets a progress bar (ms). */
     private static final long BAR_AFTER_MS = 1000;
+    /** Resolution of the progress bar (tenths of a percent). */
+    private static final long BAR_UNITS = 1000;
 
     /** One job and its estimated cost (any unit, compared only with other jobs). */
     public record Job(double cost, Runnable work) {}
@@ -54,28 +56,32 @@ public final class Parallel {
         });
         ProgressBar bar = null;
         try {
-            CompletionService<Void> done = new ExecutorCompletionService<>(pool);
-            List<Future<Void>> futures = new ArrayList<>();
+            CompletionService<Job> done = new ExecutorCompletionService<>(pool);
+            double total = 0;
             for (Job j : order) {
-                futures.add(done.submit(j.work(), null));
+                done.submit(j.work(), j);
+                total += Math.max(j.cost(), 0);
             }
+            // progress counts estimated cost, not jobs, so that the time left means something
+            double perUnit = total > 0 ? BAR_UNITS / total : 0;
             long start = System.nanoTime();
             int finished = 0;
+            double costDone = 0;
             while (finished < order.size()) {
-                Future<Void> f = done.poll(200, TimeUnit.MILLISECONDS);
+                Future<Job> f = done.poll(200, TimeUnit.MILLISECONDS);
                 if (f != null) {
-                    f.get();
+                    costDone += Math.max(f.get().cost(), 0);
                     finished++;
                     if (bar != null) {
-                        bar.stepTo(finished);
+                        bar.stepTo(Math.round(costDone * perUnit));
                     }
                 }
                 if (bar == null && !quiet && finished < order.size()
                         && System.nanoTime() - start > BAR_AFTER_MS * 1_000_000L) {
-                    bar = new ProgressBarBuilder().setTaskName(label).setInitialMax(order.size())
+                    bar = new ProgressBarBuilder().setTaskName(label).setInitialMax(BAR_UNITS).setUnit("%", 10)
                             .setConsumer(new ConsoleProgressBarConsumer(System.err))
                             .setUpdateIntervalMillis(250).build();
-                    bar.stepTo(finished);
+                    bar.stepTo(Math.round(costDone * perUnit));
                 }
             }
         } catch (InterruptedException e) {

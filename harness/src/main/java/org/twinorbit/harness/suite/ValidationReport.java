@@ -30,24 +30,29 @@ public final class ValidationReport {
 
     /** Writes every file into dir, rendering plots on {@code threads} threads. */
     public static void write(List<CaseResult> results, boolean quick, Path dir, int threads) {
-        Map<String, Object> doc = new LinkedHashMap<>();
-        doc.put("suite", quick ? "quick" : "full");
-        List<Object> cases = new ArrayList<>();
-        for (CaseResult r : results) {
-            cases.add(ResultJson.document(r));
-        }
-        doc.put("cases", cases);
-        AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(doc));
-        StringBuilder csv = new StringBuilder(ResultTables.csvHeader());
-        for (CaseResult r : results) {
-            csv.append(ResultTables.csvRows(r));
-        }
-        AtomicFiles.write(dir.resolve("validation.csv"), csv.toString());
+        // the files are independent: written on the pool together with the plots
         List<Parallel.Job> jobs = new ArrayList<>();
+        jobs.add(new Parallel.Job(2, () -> {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("suite", quick ? "quick" : "full");
+            List<Object> cases = new ArrayList<>();
+            for (CaseResult r : results) {
+                cases.add(ResultJson.document(r));
+            }
+            doc.put("cases", cases);
+            AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(doc));
+        }));
+        jobs.add(new Parallel.Job(1, () -> {
+            StringBuilder csv = new StringBuilder(ResultTables.csvHeader());
+            for (CaseResult r : results) {
+                csv.append(ResultTables.csvRows(r));
+            }
+            AtomicFiles.write(dir.resolve("validation.csv"), csv.toString());
+        }));
         for (CaseResult r : plotted(results)) {
             jobs.add(new Parallel.Job(1, () -> Plots.writeAll(r, dir.resolve("plots"), r.resolved().spec().name() + "-")));
         }
-        new Parallel(threads, true, "plots").run(jobs);
+        new Parallel(threads, true, "report").run(jobs);
         AtomicFiles.write(dir.resolve("validation.md"), markdown(results, quick));
     }
 

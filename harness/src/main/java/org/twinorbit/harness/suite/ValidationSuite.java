@@ -37,6 +37,7 @@ public final class ValidationSuite {
             l.add(offAxis(bounces("mirror-proton-eps0.05", "mirror", p, 0.05, 60, 2)));
             l.add(bounces("dipole-proton-eps0.05", "dipole", p, 0.05, 45, 2));
             l.add(bounces("tokamak-proton-eps0.02-trapped", "tokamak", p, 0.02, 80, 2));
+        l.add(eps("tokamak-electron-eps0.01-passing", "tokamak", e, 0.01, 40, 150));
             l.add(bounces("current-sheet-proton-eps0.05", "current-sheet", p, 0.05, 60, 2));
             l.add(eps("shear-electron-eps0.05", "shear", e, 0.05, 45, 10));
             l.add(energy("ramp-proton-90", "ramp", p, 1e4, 90, 20));
@@ -45,6 +46,8 @@ public final class ValidationSuite {
         }
         l.add(energy("uniform-proton-60", "uniform", p, 1e4, 60, 20));
         l.add(energy("uniform-electron-90", "uniform", e, 1e3, 90, 20));
+        // a long run: the symplectic pushers' bounded energy error against RK4's secular loss
+        l.add(energy("uniform-proton-60-long", "uniform", p, 1e4, 60, 1000));
         l.add(energy("crossed-proton-90", "crossed", p, 1e4, 90, 20));
         l.add(energy("crossed-electron-45", "crossed", e, 1e3, 45, 20));
         l.add(eps("gradient-proton-eps0.01", "gradient", p, 0.01, 90, 20));
@@ -57,8 +60,10 @@ public final class ValidationSuite {
         l.add(offAxis(eps("mirror-electron-eps0.01-losscone", "mirror", e, 0.01, 20, 100)));
         l.add(bounces("dipole-proton-eps0.01", "dipole", p, 0.01, 45, 2));
         l.add(bounces("dipole-electron-eps0.02", "dipole", e, 0.02, 70, 2));
+        l.add(bounces("dipole-proton-eps0.05", "dipole", p, 0.05, 30, 2));
         l.add(eps("tokamak-proton-eps0.02-passing", "tokamak", p, 0.02, 20, 150));
         l.add(bounces("tokamak-proton-eps0.02-trapped", "tokamak", p, 0.02, 80, 2));
+        l.add(eps("tokamak-electron-eps0.01-passing", "tokamak", e, 0.01, 40, 150));
         l.add(bounces("current-sheet-proton-eps0.02", "current-sheet", p, 0.02, 60, 2));
         l.add(bounces("current-sheet-proton-eps0.1", "current-sheet", p, 0.1, 60, 2));
         l.add(eps("shear-proton-eps0.01", "shear", p, 0.01, 60, 20));

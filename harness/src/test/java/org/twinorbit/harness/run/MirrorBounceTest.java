@@ -1,6 +1,7 @@
 package org.twinorbit.harness.run;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.twinorbit.harness.cases.CaseSpec;
@@ -37,6 +38,13 @@ class MirrorBounceTest {
         // while a wrong bounce (a 2π or a factor sqrt(γ) slip) would be far outside it
         double fullOrbit = model.metric("bounce_period_s").mean() / (1 + model.metric("bounce_period_error").mean());
         assertEquals(harmonic, fullOrbit, 1e-3 * harmonic);
+        // ⟨μ⟩ ripples reversibly at O(ε²) within each bounce, while the net change between
+        // equivalent bounce phases is exponentially small in 1/ε (Chirikov, Phys. Rep. 52, 1979):
+        // the μ jump must be far below the μ change, which must itself be visible
+        double change = model.metric("mu_change").worst();
+        double jump = model.metric("mu_jump").worst();
+        assertTrue(change > 1e-7, "mu change " + change);
+        assertTrue(jump < 1e-2 * change, "mu jump " + jump + " against change " + change);
         ResultRow boris = TestCases.row(r, "boris");
         assertEquals(harmonic, boris.metric("bounce_period_s").mean(), 1e-3 * harmonic);
         assertEquals("trapped", boris.orbitClass());
