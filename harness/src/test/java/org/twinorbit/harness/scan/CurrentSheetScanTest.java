@@ -3,6 +3,8 @@ package org.twinorbit.harness.scan;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -16,7 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
 class CurrentSheetScanTest {
 
     @Test
-    void muBreaksDownWhereKappaIsOfOrderOne(@TempDir Path dir) {
+    void muBreaksDownWhereKappaIsOfOrderOne(@TempDir Path dir) throws IOException {
         ScanResult r = ScanTestSupport.run(dir, "--field", "current-sheet", "--phases", "4",
                 "--eps-min", "0.03", "--eps-max", "0.5", "--points", "8", "--duration", "2",
                 "--tolerance", "mu_jump=0.1");
@@ -24,7 +26,11 @@ class CurrentSheetScanTest {
         assertEquals(ThresholdOutcome.CROSSED, t.outcome());
         double kappa2 = 1 / t.epsStar();
         assertTrue(kappa2 >= 3 && kappa2 <= 25, "kappa^2 at eps* = " + kappa2);
-        // κ is reported beside every point
+        // κ is reported beside every point and beside ε* (κ* = ε*^(-1/2) when L = R_c and ρ is taken in Bn)
         assertEquals(1 / Math.sqrt(0.03), r.points().get(0).value("kappa"), 1e-12);
+        JsonNode json = ScanJson.MAPPER.readTree(dir.resolve("scan.json").toFile());
+        JsonNode mu = json.get("thresholds").get(0);
+        assertEquals("mu_jump", mu.get("metric").asText());
+        assertEquals(1 / Math.sqrt(t.epsStar()), mu.get("kappa_star").asDouble(), 1e-12);
     }
 }
