@@ -160,7 +160,7 @@ public final class ModelErrorEvaluator implements PointEvaluator {
         for (ResultRow row : r.rows()) {
             if (row.errorKind().equals("discretisation")) {
                 for (String k : INTEGRATOR_METRICS) {
-                    out.put(row.integrator() + "_" + k + "_worst", Math.abs(row.metric(k).worst()));
+                    out.put(integratorKey(row.integrator(), k), Math.abs(row.metric(k).worst()));
                 }
             }
         }
@@ -174,6 +174,14 @@ public final class ModelErrorEvaluator implements PointEvaluator {
      */
     public double[] referenceSeconds() {
         return new double[] {fullOrbitNanos.sum() * 1e-9, guidingCenterNanos.sum() * 1e-9};
+    }
+
+    /**
+     * The snake_case key of an integrator's worst discretisation error, e.g.
+     * {@code gc_rk4_position_error_rho_worst} for {@code gc-rk4}.
+     */
+    static String integratorKey(String integrator, String metric) {
+        return integrator.replace('-', '_') + "_" + metric + "_worst";
     }
 
     private static Stat single(double v) {

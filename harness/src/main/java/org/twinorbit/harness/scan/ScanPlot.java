@@ -86,7 +86,7 @@ public final class ScanPlot {
             String own = m == ScanMetric.MU_JUMP ? "mu_change" : m == ScanMetric.POSITION_ERROR ? m.key() : null;
             if (own != null && r.settings().get("integrators") instanceof List<?> names) {
                 for (Object name : names) {
-                    curve(c, pts, pitch, name + "_" + own + "_worst", floor, name + " " + own + " (discretisation)" + at,
+                    curve(c, pts, pitch, ModelErrorEvaluator.integratorKey(name.toString(), own), floor, name + " " + own + " (discretisation)" + at,
                             SeriesLines.DASH_DOT);
                 }
             }
