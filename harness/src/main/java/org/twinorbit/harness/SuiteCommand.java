@@ -37,6 +37,7 @@ public final class SuiteCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         int threads = execution.threads();
+        OutputDirectory.prepare(out);
         List<Case> cases = ValidationSuite.cases(quick);
         long t0 = System.nanoTime();
         List<CaseResult> results = new CaseRunner(threads, execution.quiet()).run(cases);
