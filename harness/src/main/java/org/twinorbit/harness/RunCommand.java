@@ -42,6 +42,9 @@ public final class RunCommand implements Callable<Integer> {
         Case c = caseOptions.toCase();
         int threads = execution.threads();
         new ResolvedCase(c); // checks the field, start and energy before anything runs
+        if (out != null) {
+            OutputDirectory.prepare(out);
+        }
         CaseResult r = new CaseRunner(threads, execution.quiet()).run(c);
         PrintWriter pw = spec.commandLine().getOut();
         if (json) {

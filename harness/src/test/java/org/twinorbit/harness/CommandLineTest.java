@@ -124,6 +124,16 @@ class CommandLineTest {
     }
 
     @Test
+    void unusableOutputDirectoryIsRefusedBeforeAnyWork() throws IOException {
+        Path file = tmp.resolve("a-file");
+        Files.writeString(file, "not a directory");
+        Outcome o = exec("suite", "--quick", "--quiet", "--out", file.resolve("sub").toString());
+        assertEquals(2, o.code(), o.err());
+        assertTrue(o.err().startsWith("twinorbit: --out: cannot create directory"), o.err());
+        assertEquals("", o.out());
+    }
+
+    @Test
     void integratorsListsEveryIntegrator() {
         Outcome o = exec("integrators", "--json");
         assertEquals(0, o.code());

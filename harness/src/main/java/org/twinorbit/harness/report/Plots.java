@@ -92,8 +92,17 @@ public final class Plots {
         XYChart c = chart("guiding-center orbit, " + r.resolved().spec().name() + " (phase 0)",
                 label(ax[0]), label(ax[1]));
         c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
-        addTrack(c, "full orbit, gyro-averaged (reference)", r.fullOrbitCenters(), ax, tc);
-        addTrack(c, "guiding center (reference)", r.gcTrack(), ax, tc);
+        // the full orbit wide and solid, the guiding center dashed on top: both stay visible
+        // where they agree
+        XYSeries fo = addTrack(c, "full orbit, gyro-averaged (reference)", r.fullOrbitCenters(), ax, tc);
+        XYSeries gc = addTrack(c, "guiding center (reference)", r.gcTrack(), ax, tc);
+        if (fo != null) {
+            fo.setLineWidth(3.5f);
+        }
+        if (gc != null) {
+            gc.setLineStyle(new java.awt.BasicStroke(1.5f, java.awt.BasicStroke.CAP_BUTT,
+                    java.awt.BasicStroke.JOIN_ROUND, 10f, new float[] {8f, 5f}, 0f));
+        }
         return c;
     }
 
@@ -127,10 +136,10 @@ public final class Plots {
         return c;
     }
 
-    private static void addTrack(XYChart c, String name, Track t, String[] ax, double tc) {
+    private static XYSeries addTrack(XYChart c, String name, Track t, String[] ax, double tc) {
         int n = t.size();
         if (n < 2) {
-            return;
+            return null;
         }
         int stride = Math.max(1, (n + MAX_POINTS - 1) / MAX_POINTS);
         int m = (n - 1) / stride + 2;
@@ -144,7 +153,7 @@ public final class Plots {
         }
         a[j] = coord(t, n - 1, ax[0], tc); // always end at the last sample
         b[j] = coord(t, n - 1, ax[1], tc);
-        line(c, name, java.util.Arrays.copyOf(a, j + 1), java.util.Arrays.copyOf(b, j + 1));
+        return line(c, name, java.util.Arrays.copyOf(a, j + 1), java.util.Arrays.copyOf(b, j + 1));
     }
 
     private static double coord(Track t, int i, String axis, double tc) {
@@ -185,7 +194,7 @@ public final class Plots {
         return c;
     }
 
-    private static void line(XYChart c, String name, double[] x, double[] y) {
+    private static XYSeries line(XYChart c, String name, double[] x, double[] y) {
         if (x.length > MAX_POINTS) {
             int stride = (x.length + MAX_POINTS - 1) / MAX_POINTS;
             int m = (x.length + stride - 1) / stride;
@@ -201,6 +210,7 @@ public final class Plots {
         XYSeries s = c.addSeries(name, x, y);
         s.setMarker(SeriesMarkers.NONE);
         s.setLineWidth(1.2f);
+        return s;
     }
 
     private static double[] scale(double[] v, double k) {

@@ -155,9 +155,12 @@ final class Assembly {
 
         List<ReferenceSummary> refs = List.of(
                 summary("full-orbit", References.fullOrbitMethod(), p.c.referenceRtol(), foSelf,
-                        p.foRef, p.foTight),
+                        java.util.Arrays.stream(p.foRef).map(FullOrbitRecord::outcome).toList(),
+                        java.util.Arrays.stream(p.foRef).mapToDouble(r -> r.energy().maxError()).toArray(),
+                        p.foTight.outcome()),
                 summary("guiding-center", References.guidingCenterMethod(), p.c.referenceRtol(), gcSelf,
-                        new Object[] {p.gcRef}, p.gcTight));
+                        List.of(p.gcRef.outcome()), new double[] {p.gcRef.recorder().maxEnergyError()},
+                        p.gcTight.outcome()));
 
         List<CaseResult.Curve> mu = new ArrayList<>();
         List<CaseResult.Curve> energy = new ArrayList<>();
@@ -268,24 +271,17 @@ final class Assembly {
         return reg.getSlope();
     }
 
+    /**
+     * A reference over the ensemble. @param outcomes one per phase @param energyErrors its own
+     * energy error per phase @param tight the self-estimate run (its time counts as cost)
+     */
     private static ReferenceSummary summary(String model, String method, double rtol, double self,
-                                            Object[] records, Object tight) {
-        double energy = 0;
+                                            List<Outcome> outcomes, double[] energyErrors, Outcome tight) {
         double steps = 0;
         double evals = 0;
-        double wall = 0;
+        double wall = tight.wallNanos();
         OrbitStatus worst = OrbitStatus.OK;
-        double[] e = new double[records.length];
-        for (int k = 0; k < records.length; k++) {
-            Outcome o;
-            if (records[k] instanceof FullOrbitRecord r) {
-                o = r.outcome();
-                e[k] = r.energy().maxError();
-            } else {
-                GuidingCenterRecord r = (GuidingCenterRecord) records[k];
-                o = r.outcome();
-                e[k] = r.recorder().maxEnergyError();
-            }
+        for (Outcome o : outcomes) {
             steps += o.steps();
             evals += o.fieldEvaluations();
             wall += o.wallNanos();
@@ -293,12 +289,9 @@ final class Assembly {
                 worst = o.status();
             }
         }
-        wall += tight instanceof FullOrbitRecord r ? r.outcome().wallNanos()
-                : ((GuidingCenterRecord) tight).outcome().wallNanos();
-        energy = Stat.of(e).mean();
-        return new ReferenceSummary(model, method, rtol, self, energy, worst.label(),
-                steps < 0 ? Double.NaN : steps / records.length,
-                evals / records.length, wall * 1e-9);
+        int n = outcomes.size();
+        return new ReferenceSummary(model, method, rtol, self, Stat.of(energyErrors).mean(), worst.label(),
+                steps < 0 ? Double.NaN : steps / n, evals / n, wall * 1e-9);
     }
 
     private static CaseResult.Curve muCurve(String label, GyroAverager g) {

@@ -46,6 +46,12 @@ public final class CaseRunner {
      * where halving dt divides it by 2^order.
      */
     static final double CONVERGENCE_GYRO = 4;
+    /** Estimated cost of one full-orbit reference sample, in pusher steps (for job ordering only). */
+    static final double FO_REFERENCE_SAMPLE = 11;
+    /** Estimated cost of one guiding-center reference sample, in pusher steps. */
+    static final double GC_REFERENCE_SAMPLE = 3;
+    /** Estimated cost of one fixed guiding-center step, in pusher steps. */
+    static final double GC_STEP = 6;
 
     private final int threads;
     private final boolean quiet;
@@ -222,8 +228,10 @@ public final class CaseRunner {
             int stride = (int) Math.max(1, n / PLOT_POINTS);
             int refStride = (int) Math.max(1, samples / PLOT_POINTS);
             int gcStride = (int) Math.max(1, gcN / PLOT_POINTS);
-            // cost weights: a reference sample costs about as much as a few hundred fixed steps
-            double refCost = samples * 40.0;
+            // job costs in units of one full-orbit pusher step (with its observers), measured on
+            // the dipole: a full-orbit reference sample ~11, a guiding-center reference sample ~3,
+            // a guiding-center RK4 step ~6; the tighter self-estimate runs cost about twice as much
+            double refCost = samples * FO_REFERENCE_SAMPLE;
             for (int k = 0; k < nph; k++) {
                 int kk = k;
                 jobs.add(new Parallel.Job(refCost, () -> foRef[kk] = References.fullOrbit(rc.field(), rc.species(),
@@ -235,25 +243,25 @@ public final class CaseRunner {
                 }
             }
             // the zeroth-order ring shares one guiding center: its runs are done once
-            jobs.add(new Parallel.Job(gcN * 4.0, () -> gcRef = References.guidingCenter(rc.field(),
+            jobs.add(new Parallel.Job(samples * GC_REFERENCE_SAMPLE, () -> gcRef = References.guidingCenter(rc.field(),
                     rc.species(), mu, gc0, pPar0, tEnd, samples, c.referenceRtol(), refStride, deadband, 0)));
             for (int g = 0; g < ng; g++) {
                 int gg = g;
-                jobs.add(new Parallel.Job(gcN, () -> gc[gg] = Orbits.advance(gcs.get(gg), rc.field(),
+                jobs.add(new Parallel.Job(gcN * GC_STEP, () -> gc[gg] = Orbits.advance(gcs.get(gg), rc.field(),
                         rc.species(), mu, gc0, pPar0, gcDt, gcN, gcStride, deadband)));
             }
             jobs.add(new Parallel.Job(refCost * 2, () -> foTight = References.fullOrbit(rc.field(), rc.species(),
                     x0[0], u0[0], tEnd, samples, References.tighter(c.referenceRtol()), refStride, deadband)));
-            jobs.add(new Parallel.Job(gcN * 8.0, () -> gcTight = References.guidingCenter(rc.field(), rc.species(),
+            jobs.add(new Parallel.Job(samples * GC_REFERENCE_SAMPLE * 2, () -> gcTight = References.guidingCenter(rc.field(), rc.species(),
                     mu, gc0, pPar0, tEnd, samples, References.tighter(c.referenceRtol()), refStride, deadband, 0)));
             long convSamples = Math.max(1, (long) Math.ceil(convN * dt / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO));
             if (np == 0) {
                 addGuidingCenterConvergence(jobs, ng);
                 return;
             }
-            jobs.add(new Parallel.Job(convSamples * 40.0, () -> convRef = References.fullOrbit(rc.field(), rc.species(),
+            jobs.add(new Parallel.Job(convSamples * FO_REFERENCE_SAMPLE, () -> convRef = References.fullOrbit(rc.field(), rc.species(),
                     x0[0], u0[0], convN * dt, convSamples, c.referenceRtol(), 1, deadband)));
-            jobs.add(new Parallel.Job(convSamples * 80.0, () -> convTight = References.fullOrbit(rc.field(),
+            jobs.add(new Parallel.Job(convSamples * FO_REFERENCE_SAMPLE * 2, () -> convTight = References.fullOrbit(rc.field(),
                     rc.species(), x0[0], u0[0], convN * dt, convSamples, References.tighter(c.referenceRtol()), 1,
                     deadband)));
             for (int i = 0; i < np; i++) {
@@ -275,7 +283,7 @@ public final class CaseRunner {
                     int gg = g;
                     int ll = level;
                     long m = gcN << (level + 1);
-                    jobs.add(new Parallel.Job(m, () -> gcConv[gg][ll] = Orbits.advance(gcs.get(gg), rc.field(),
+                    jobs.add(new Parallel.Job(m * GC_STEP, () -> gcConv[gg][ll] = Orbits.advance(gcs.get(gg), rc.field(),
                             rc.species(), mu, gc0, pPar0, gcDt / (1 << (ll + 1)), m,
                             (int) Math.max(1, m / PLOT_POINTS), deadband)));
                 }
