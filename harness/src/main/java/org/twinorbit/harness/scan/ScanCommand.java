@@ -119,6 +119,7 @@ public final class ScanCommand implements Runnable {
             return;
         }
         ScanRequest.Built setup = setup();
+        prepareOut();
         long t0 = System.nanoTime();
         ScanResult r;
         if (execution.quiet()) {
@@ -149,6 +150,7 @@ public final class ScanCommand implements Runnable {
             throw new IllegalArgumentException("--safe-use needs --points >= 2 and --phases in [1, 1024], got "
                     + points + " and " + phases);
         }
+        prepareOut();
         long t0 = System.nanoTime();
         SafeUseMap.Resolution res = new SafeUseMap.Resolution(points, phases);
         SafeUseMap.Result r;
@@ -163,6 +165,18 @@ public final class ScanCommand implements Runnable {
         w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png (%d rows) in %.1f s%n", out,
                 r.rows().size(), (System.nanoTime() - t0) * 1e-9);
         w.flush();
+    }
+
+    /** Makes --out, after every other option has been checked and before any orbit runs. */
+    private void prepareOut() {
+        try {
+            java.nio.file.Files.createDirectories(out);
+        } catch (java.io.IOException e) {
+            throw new IllegalArgumentException("--out: cannot create directory " + out + " (" + e.getMessage() + ")", e);
+        }
+        if (!java.nio.file.Files.isWritable(out)) {
+            throw new IllegalArgumentException("--out: directory " + out + " is not writable");
+        }
     }
 
     /** Checks every option and builds the scan; no orbit is computed here. */

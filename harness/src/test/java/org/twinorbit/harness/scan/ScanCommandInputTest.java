@@ -48,7 +48,7 @@ class ScanCommandInputTest {
     }
 
     @Test
-    void exitCodeTwoAndNothingWritten(@TempDir Path dir) {
+    void exitCodeTwoAndNothingWritten(@TempDir Path dir) throws java.io.IOException {
         Path out = dir.resolve("never");
         StringWriter err = new StringWriter();
         CommandLine cl = new CommandLine(new ScanCommand());
@@ -63,5 +63,9 @@ class ScanCommandInputTest {
         assertEquals(2, cl.execute("--field", "mirror", "--points", "many", "--out", out.toString()));
         assertEquals(2, cl.execute("--safe-use", "--field", "mirror", "--out", out.toString()));
         assertFalse(Files.exists(out), "no output may be written for bad input");
+        Path file = dir.resolve("a-file");
+        Files.writeString(file, "not a directory");
+        assertEquals(2, cl.execute("--field", "mirror", "--out", file.resolve("sub").toString()));
+        assertTrue(err.toString().contains("--out: cannot create directory"), err.toString());
     }
 }
