@@ -21,10 +21,13 @@ public final class Relativity {
         return 1.0 + kineticEv * Constants.E / s.restEnergy();
     }
 
-    /** |u| = γ|v| (m/s) for a kinetic energy (eV). */
+    /**
+     * |u| = γ|v| (m/s) for a kinetic energy (eV). With k = (γ − 1) = W/(mc²), γ² − 1 is written
+     * k (2 + k): forming γ² − 1 from γ would lose all digits of a small k.
+     */
     public static double uFromKinetic(Species s, double kineticEv) {
-        double g = gammaFromKinetic(s, kineticEv);
-        return Constants.C * Math.sqrt(g * g - 1.0);
+        double k = kineticEv * Constants.E / s.restEnergy();
+        return Constants.C * Math.sqrt(k * (2.0 + k));
     }
 
     /** Momentum magnitude p = m γ v (kg m/s) for a kinetic energy (eV). */
@@ -32,10 +35,10 @@ public final class Relativity {
         return s.mass() * uFromKinetic(s, kineticEv);
     }
 
-    /** Speed |v| (m/s) for a kinetic energy (eV). */
+    /** Speed |v| (m/s) for a kinetic energy (eV); 1 − 1/γ² is written k (2 + k)/(1 + k)² for precision. */
     public static double speedFromKinetic(Species s, double kineticEv) {
-        double g = gammaFromKinetic(s, kineticEv);
-        return Constants.C * Math.sqrt(1.0 - 1.0 / (g * g));
+        double k = kineticEv * Constants.E / s.restEnergy();
+        return Constants.C * Math.sqrt(k * (2.0 + k)) / (1.0 + k);
     }
 
     /**
