@@ -10,7 +10,8 @@ import picocli.CommandLine.Command;
         description = {
             "Runs the same charged particles as full orbits and as guiding centers through the same",
             "fields, and measures how well each integrator and each model keeps the physics."},
-        subcommands = {FieldsCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {FieldsCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
+            CommandLine.HelpCommand.class})
 public final class TwinorbitCommand implements Runnable {
 
     @CommandLine.Spec
@@ -25,6 +26,7 @@ public final class TwinorbitCommand implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new TwinorbitCommand());
         cl.setExecutionExceptionHandler(new UserErrorHandler());
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
         return cl;
     }
 }

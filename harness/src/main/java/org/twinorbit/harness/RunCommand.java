@@ -1,0 +1,69 @@
+package org.twinorbit.harness;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.twinorbit.harness.cases.Case;
+import org.twinorbit.harness.cases.ResolvedCase;
+import org.twinorbit.harness.report.ResultJson;
+import org.twinorbit.harness.report.ResultTables;
+import org.twinorbit.harness.report.RunReport;
+import org.twinorbit.harness.run.CaseResult;
+import org.twinorbit.harness.run.CaseRunner;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code twinorbit run}: one case, every chosen integrator, a metrics table. */
+@Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Run one case: every chosen full-orbit pusher and guiding-center integrator and both references "
+                + "on a gyrophase ensemble; print the errors, discretisation and model error in separate rows.")
+public final class RunCommand implements Callable<Integer> {
+
+    @Mixin
+    CaseOptions caseOptions;
+
+    @Mixin
+    ExecutionOptions execution;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Also write run.md, run.csv, run.json and PNG plots into DIR.")
+    Path out;
+
+    @Option(names = "--json", description = "Print run.json on stdout instead of the table.")
+    boolean json;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Case c = caseOptions.toCase();
+        int threads = execution.threads();
+        new ResolvedCase(c); // checks the field, start and energy before anything runs
+        if (out != null) {
+            OutputDirectory.prepare(out);
+        }
+        CaseResult r = new CaseRunner(threads, execution.quiet()).run(c);
+        PrintWriter pw = spec.commandLine().getOut();
+        if (json) {
+            pw.print(ResultJson.write(ResultJson.document(r)));
+        } else {
+            for (String line : ResultTables.describe(r)) {
+                pw.println(line);
+            }
+            pw.println();
+            pw.print(ResultTables.table(r, null).aligned());
+        }
+        if (out != null) {
+            RunReport.write(r, out);
+            if (!json) {
+                pw.println();
+                pw.println("wrote " + out.resolve("run.md") + ", run.csv, run.json and plots");
+            }
+        }
+        pw.flush();
+        return 0;
+    }
+}

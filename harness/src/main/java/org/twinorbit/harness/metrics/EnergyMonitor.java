@@ -1,0 +1,81 @@
+package org.twinorbit.harness.metrics;
+
+import org.twinorbit.fields.Field;
+import org.twinorbit.integrators.FullOrbitObserver;
+import org.twinorbit.shared.Relativity;
+import org.twinorbit.shared.Species;
+
+/**
+ * The energy error of a full orbit: max over samples of |W − W0| / K0 with W = kinetic + qΦ
+ * and K0 the initial kinetic energy (DESIGN.md "What is measured"). Defined only in static fields
+ * with a potential; elsewhere the error reads NaN. An error above {@link #BLOW_UP} marks the run
+ * as blown up, which the runner reports as unstable.
+ */
+public final class EnergyMonitor implements FullOrbitObserver {
+
+    /**
+     * Relative energy change (of the initial kinetic energy) taken as a blow-up: no scheme that
+     * is still tracking the orbit gains or loses all of its kinetic energy.
+     */
+    public static final double BLOW_UP = 1.0;
+
+    private final Field field;
+    private final Species species;
+    private final boolean defined;
+    private final Series series;
+    private boolean started;
+    private double w0;
+    private double k0;
+    private double maxError;
+    private double blowUpTime = Double.NaN;
+
+    /** @param stride keep one point in this many for the plotted series */
+    public EnergyMonitor(Field field, Species species, int stride) {
+        this.field = field;
+        this.species = species;
+        this.defined = field.isStatic() && field.hasPotential();
+        this.series = new Series(stride);
+    }
+
+    @Override
+    public void observe(double t, double[] x, double[] u) {
+        if (!defined) {
+            return;
+        }
+        double k = Relativity.kineticJoules(species, u[0], u[1], u[2]);
+        double w = k + (field.hasElectricField() ? species.charge() * field.potential(t, x[0], x[1], x[2]) : 0.0);
+        if (!started) {
+            started = true;
+            w0 = w;
+            k0 = k;
+        }
+        double err = Math.abs(w - w0) / k0;
+        series.offer(t, (w - w0) / k0);
+        if (err > maxError || Double.isNaN(err)) {
+            maxError = err;
+        }
+        if (!(err <= BLOW_UP) && Double.isNaN(blowUpTime)) {
+            blowUpTime = t;
+        }
+    }
+
+    /** max |W − W0|/K0, NaN where energy is not conserved by the field. */
+    public double maxError() {
+        return defined && started ? maxError : Double.NaN;
+    }
+
+    /** True once the energy error passed {@link #BLOW_UP} (or became NaN). */
+    public boolean blownUp() {
+        return !Double.isNaN(blowUpTime);
+    }
+
+    /** Time (s) the energy blew up; NaN if it did not. */
+    public double blowUpTime() {
+        return blowUpTime;
+    }
+
+    /** Signed (W − W0)/K0 against time, thinned, for plots. */
+    public Series series() {
+        return series;
+    }
+}

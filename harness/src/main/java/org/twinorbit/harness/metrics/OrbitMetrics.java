@@ -1,0 +1,209 @@
+package org.twinorbit.harness.metrics;
+
+import org.twinorbit.fields.Field;
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.shared.FieldSample;
+
+/**
+ * The metrics of DESIGN.md "What is measured" computed from what the observers recorded. Every
+ * average is over whole periods: whole gyrations for a full orbit, whole bounce periods
+ * (between mirror points of the same direction) for a trapped orbit.
+ */
+public final class OrbitMetrics {
+
+    private OrbitMetrics() {}
+
+    /** Trapped, passing or lost, as reported. */
+    public enum OrbitClass {
+        TRAPPED("trapped"), PASSING("passing"), LOST("lost");
+
+        private final String label;
+
+        OrbitClass(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
+        }
+    }
+
+    /** μ change: max over gyrations k of |⟨μ⟩_k − ⟨μ⟩_0| / ⟨μ⟩_0; NaN with fewer than two gyrations. */
+    public static double muChange(GyroAverager g) {
+        if (g.gyrations() < 2 || !(g.mu(0) > 0)) {
+            return Double.NaN;
+        }
+        double mu0 = g.mu(0);
+        double max = 0;
+        for (int k = 1; k < g.gyrations(); k++) {
+            max = Math.max(max, Math.abs(g.mu(k) - mu0) / mu0);
+        }
+        return max;
+    }
+
+    /**
+     * μ jump, the irreversible part: ⟨μ⟩ (interpolated between gyration mid-times) at each
+     * mirror point of the same direction — equivalent points of the bounce motion — compared
+     * with its value at the first one, max over the run, relative. Without two such points (no
+     * slow period) it is the change between the first and the last whole gyration.
+     */
+    public static double muJump(GyroAverager g) {
+        if (g.gyrations() < 2 || !(g.mu(0) > 0)) {
+            return Double.NaN;
+        }
+        double[] events = g.centers().upwardMirrorTimes();
+        if (events.length < 2) {
+            return Math.abs(g.mu(g.gyrations() - 1) - g.mu(0)) / g.mu(0);
+        }
+        double ref = muAt(g, events[0]);
+        double max = 0;
+        for (int i = 1; i < events.length; i++) {
+            max = Math.max(max, Math.abs(muAt(g, events[i]) - ref) / ref);
+        }
+        return max;
+    }
+
+    /** ⟨μ⟩ at time t (s), linear between gyration mid-times. */
+    static double muAt(GyroAverager g, double t) {
+        Track c = g.centers();
+        int n = g.gyrations();
+        if (t <= c.time(0)) {
+            return g.mu(0);
+        }
+        for (int k = 1; k < n; k++) {
+            if (t <= c.time(k)) {
+                double f = (t - c.time(k - 1)) / (c.time(k) - c.time(k - 1));
+                return g.mu(k - 1) + f * (g.mu(k) - g.mu(k - 1));
+            }
+        }
+        return g.mu(n - 1);
+    }
+
+    /**
+     * The averaging window [t_a, t_b] (s) of a track: from the first to the last mirror point of
+     * the same direction when there are two (whole bounce periods), else the whole track.
+     */
+    public static double[] window(Track t) {
+        double[] ev = t.upwardMirrorTimes();
+        if (ev.length >= 2) {
+            return new double[] {ev[0], ev[ev.length - 1]};
+        }
+        return new double[] {t.firstTime(), t.lastTime()};
+    }
+
+    /**
+     * Mean perpendicular velocity (m/s) of a guiding-center track over [ta, tb]: the sum of the
+     * displacements between samples with their component along b (at the midpoint) removed,
+     * divided by the time span. NaN when the track does not cover the window.
+     */
+    public static double[] meanPerpendicularVelocity(Field field, Track track, double ta, double tb) {
+        double[] v = {Double.NaN, Double.NaN, Double.NaN};
+        if (track.size() < 2 || !(tb > ta) || ta < track.firstTime() - 1e-9 * (tb - ta)
+                || tb > track.lastTime() + 1e-9 * (tb - ta)) {
+            return v;
+        }
+        FieldSample fs = new FieldSample();
+        double[] b = new double[3];
+        double[] prev = track.positionAt(ta, new double[3]);
+        double tPrev = ta;
+        double[] cur = new double[3];
+        double sx = 0, sy = 0, sz = 0;
+        int i = 0;
+        while (i < track.size() && track.time(i) <= ta) {
+            i++;
+        }
+        boolean last = false;
+        while (!last) {
+            double t;
+            if (i < track.size() && track.time(i) < tb) {
+                t = track.time(i);
+                cur[0] = track.coord(i, 0);
+                cur[1] = track.coord(i, 1);
+                cur[2] = track.coord(i, 2);
+                i++;
+            } else {
+                t = tb;
+                track.positionAt(tb, cur);
+                last = true;
+            }
+            double dx = cur[0] - prev[0], dy = cur[1] - prev[1], dz = cur[2] - prev[2];
+            field.evaluate(0.5 * (t + tPrev), 0.5 * (cur[0] + prev[0]), 0.5 * (cur[1] + prev[1]),
+                    0.5 * (cur[2] + prev[2]), fs);
+            fs.unitB(b);
+            double par = dx * b[0] + dy * b[1] + dz * b[2];
+            sx += dx - par * b[0];
+            sy += dy - par * b[1];
+            sz += dz - par * b[2];
+            System.arraycopy(cur, 0, prev, 0, 3);
+            tPrev = t;
+        }
+        double span = tb - ta;
+        v[0] = sx / span;
+        v[1] = sy / span;
+        v[2] = sz / span;
+        return v;
+    }
+
+    /**
+     * Drift error |V − V_ref| / |V_ref| of mean perpendicular velocities; NaN when the
+     * reference drift is below {@code floor} (m/s), where a relative error means nothing.
+     */
+    public static double driftError(double[] v, double[] vRef, double floor) {
+        double ref = Math.sqrt(vRef[0] * vRef[0] + vRef[1] * vRef[1] + vRef[2] * vRef[2]);
+        if (!(ref > floor)) {
+            return Double.NaN;
+        }
+        double dx = v[0] - vRef[0], dy = v[1] - vRef[1], dz = v[2] - vRef[2];
+        return Math.sqrt(dx * dx + dy * dy + dz * dz) / ref;
+    }
+
+    /**
+     * |X − X_ref| / ρ0 at the last time both tracks reach. @param rho0 gyroradius (m)
+     */
+    public static double positionError(Track a, Track ref, double rho0) {
+        if (a.size() == 0 || ref.size() == 0) {
+            return Double.NaN;
+        }
+        double t = Math.min(a.lastTime(), ref.lastTime());
+        double[] p = a.positionAt(t, new double[3]);
+        double[] q = ref.positionAt(t, new double[3]);
+        return Math.sqrt((p[0] - q[0]) * (p[0] - q[0]) + (p[1] - q[1]) * (p[1] - q[1])
+                + (p[2] - q[2]) * (p[2] - q[2])) / rho0;
+    }
+
+    /** Bounce period (s): mean spacing of mirror points of the same direction; NaN with fewer than two. */
+    public static double bouncePeriod(Track t) {
+        double[] ev = t.upwardMirrorTimes();
+        return ev.length < 2 ? Double.NaN : (ev[ev.length - 1] - ev[0]) / (ev.length - 1);
+    }
+
+    /** Mean |B| (T) at the mirror points (both directions) of a track; NaN without one. */
+    public static double mirrorField(Field field, Track t) {
+        double[] ev = t.allMirrorTimes();
+        if (ev.length == 0) {
+            return Double.NaN;
+        }
+        FieldSample fs = new FieldSample();
+        double[] p = new double[3];
+        double sum = 0;
+        for (double e : ev) {
+            t.positionAt(e, p);
+            field.evaluate(e, p[0], p[1], p[2], fs);
+            sum += fs.bMag();
+        }
+        return sum / ev.length;
+    }
+
+    /** Lost when the run left the domain, trapped when v∥ changed sign, passing otherwise. */
+    public static OrbitClass classify(OrbitStatus status, Track t) {
+        if (status == OrbitStatus.LOST) {
+            return OrbitClass.LOST;
+        }
+        return t.allMirrorTimes().length > 0 ? OrbitClass.TRAPPED : OrbitClass.PASSING;
+    }
+
+    /** Relative difference a/b − 1; NaN when either is NaN or b is 0. */
+    public static double relative(double a, double b) {
+        return b == 0 ? Double.NaN : a / b - 1.0;
+    }
+}

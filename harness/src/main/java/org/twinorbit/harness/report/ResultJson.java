@@ -1,0 +1,167 @@
+package org.twinorbit.harness.report;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.twinorbit.harness.cases.Case;
+import org.twinorbit.harness.cases.ResolvedCase;
+import org.twinorbit.harness.run.CaseResult;
+import org.twinorbit.harness.run.ReferenceSummary;
+import org.twinorbit.harness.run.ResultRow;
+import org.twinorbit.harness.run.Stat;
+
+/**
+ * The JSON contract of {@code run.json} and, per case, of {@code validation.json}. Field names
+ * are snake_case; SI units are in the names where a quantity has one; a value that is not
+ * defined (a μ change for a guiding center, a drift error where the reference has no drift) is
+ * {@code null}. Wall-clock times are left out, so the file is byte-identical for any thread count.
+ *
+ * <pre>
+ * case:       name, field, field_parameters {name: value}, species, mass_kg, charge_c, start_m [x,y,z]
+ *             (initial guiding center), energy_ev, pitch_deg, phases, duration, duration_unit,
+ *             pushers [..], steps_per_gyro, gc_integrators [..], gc_step_gyro, reference_rtol,
+ *             eps (ρ0/L), rho_m (ρ0 = p/(|q|B)), L_m (null when infinite), b0_t (|B| at the start),
+ *             gyro_period_s (T_c), end_time_s, bounce_period_s (measured first when the duration is
+ *             in bounces, else null), full_orbit_dt_s, gc_dt_s
+ * results:    one object per integrator, then the model row:
+ *             integrator, model (full-orbit | guiding-center), error_kind (discretisation | model),
+ *             status (ok | lost | unstable | model-failure, the worst over the ensemble),
+ *             status_time_s (when that status was reached, earliest phase; null when ok),
+ *             orbit_class (trapped | passing | lost, '/'-joined when phases differ),
+ *             class_agreement (fraction of phases classed like the reference),
+ *             mu_change, mu_jump, energy_error, phase_error, drift_error, position_error_rho,
+ *             bounce_period_s, bounce_period_error, mirror_field_t, mirror_field_error —
+ *             each {mean, worst} over the gyrophase ensemble (worst = largest magnitude, sign kept),
+ *             invariant_error {invariant: {mean, worst}} (full-orbit rows; |I − I0|/S0 with S0 the
+ *             invariant's scale at the start: m|u| for momenta, m|u|R for angular momenta),
+ *             order (slope of log error vs log dt over dt, dt/2, dt/4; null when not measurable),
+ *             convergence {dt_s [..], error_rho [..]} (end-position error of phase 0 against the reference),
+ *             steps, field_evaluations (per orbit, mean over the ensemble)
+ * reference:  full_orbit and guiding_center: method, rtol, self_error_rho (|x − x_tight|/ρ0 at the end,
+ *             x_tight from a run at rtol/100), energy_error, status, steps, field_evaluations
+ * </pre>
+ */
+public final class ResultJson {
+
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ResultJson() {}
+
+    /** The whole document of one run. */
+    public static Map<String, Object> document(CaseResult r) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("case", caseObject(r));
+        List<Object> results = new ArrayList<>();
+        for (ResultRow row : r.rows()) {
+            results.add(rowObject(row));
+        }
+        m.put("results", results);
+        Map<String, Object> refs = new LinkedHashMap<>();
+        for (ReferenceSummary s : r.references()) {
+            refs.put(s.model().replace('-', '_'), referenceObject(s));
+        }
+        m.put("reference", refs);
+        return m;
+    }
+
+    public static Map<String, Object> caseObject(CaseResult r) {
+        ResolvedCase rc = r.resolved();
+        Case c = rc.spec();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", c.name());
+        m.put("field", c.field());
+        m.put("field_parameters", new LinkedHashMap<>(c.fieldParameters()));
+        m.put("species", c.species().name());
+        m.put("mass_kg", c.species().mass());
+        m.put("charge_c", c.species().charge());
+        m.put("start_m", List.of(rc.start().x(), rc.start().y(), rc.start().z()));
+        m.put("energy_ev", num(rc.energyEv()));
+        m.put("pitch_deg", c.pitchDeg());
+        m.put("phases", c.phases());
+        m.put("duration", c.duration());
+        m.put("duration_unit", c.durationUnit().label());
+        m.put("pushers", c.pushers());
+        m.put("steps_per_gyro", c.stepsPerGyro());
+        m.put("gc_integrators", c.gcIntegrators());
+        m.put("gc_step_gyro", c.gcStepGyro());
+        m.put("reference_rtol", c.referenceRtol());
+        m.put("eps", num(rc.eps()));
+        m.put("rho_m", num(rc.rho0()));
+        m.put("L_m", num(rc.length()));
+        m.put("b0_t", num(rc.b0()));
+        m.put("gyro_period_s", num(rc.gyroPeriod()));
+        m.put("end_time_s", num(r.endTime()));
+        m.put("bounce_period_s", num(r.bouncePeriod()));
+        m.put("full_orbit_dt_s", num(rc.fullOrbitStep()));
+        m.put("gc_dt_s", num(r.gcStep()));
+        return m;
+    }
+
+    public static Map<String, Object> rowObject(ResultRow row) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("integrator", row.integrator());
+        m.put("model", row.model());
+        m.put("error_kind", row.errorKind());
+        m.put("status", row.status());
+        m.put("status_time_s", num(row.statusTime()));
+        m.put("orbit_class", row.orbitClass());
+        m.put("class_agreement", num(row.classAgreement()));
+        row.metrics().forEach((k, v) -> m.put(k, stat(v)));
+        Map<String, Object> inv = new LinkedHashMap<>();
+        row.invariants().forEach((k, v) -> inv.put(k, stat(v)));
+        m.put("invariant_error", inv);
+        m.put("order", num(row.order()));
+        Map<String, Object> conv = new LinkedHashMap<>();
+        conv.put("dt_s", nums(row.convergenceDt()));
+        conv.put("error_rho", nums(row.convergenceError()));
+        m.put("convergence", conv);
+        m.put("steps", num(row.steps()));
+        m.put("field_evaluations", num(row.fieldEvaluations()));
+        return m;
+    }
+
+    static Map<String, Object> referenceObject(ReferenceSummary s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("method", s.method());
+        m.put("rtol", s.rtol());
+        m.put("self_error_rho", num(s.selfErrorRho()));
+        m.put("energy_error", num(s.energyError()));
+        m.put("status", s.status());
+        m.put("steps", num(s.steps()));
+        m.put("field_evaluations", num(s.fieldEvaluations()));
+        return m;
+    }
+
+    private static Map<String, Object> stat(Stat s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("mean", num(s.mean()));
+        m.put("worst", num(s.worst()));
+        return m;
+    }
+
+    /** A finite number, or null. */
+    static Double num(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+
+    private static List<Double> nums(double[] v) {
+        List<Double> l = new ArrayList<>();
+        for (double d : v) {
+            l.add(num(d));
+        }
+        return l;
+    }
+
+    /** Pretty-printed JSON with a trailing newline. */
+    public static String write(Object tree) {
+        try {
+            return JSON.writeValueAsString(tree).replace("\r\n", "\n") + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

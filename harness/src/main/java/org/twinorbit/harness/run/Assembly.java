@@ -1,0 +1,312 @@
+package org.twinorbit.harness.run;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeSet;
+import org.apache.commons.math3.stat.regression.SimpleRegression;
+import org.twinorbit.fields.Field;
+import org.twinorbit.harness.metrics.GyroAverager;
+import org.twinorbit.harness.metrics.OrbitMetrics;
+import org.twinorbit.harness.metrics.OrbitMetrics.OrbitClass;
+import org.twinorbit.harness.metrics.Track;
+import org.twinorbit.integrators.OrbitStatus;
+
+/** Turns the records of a finished {@link CaseRunner.Plan} into rows, in a fixed order. */
+final class Assembly {
+
+    /**
+     * A reference drift that moves the guiding center by less than this many ρ0 over the whole
+     * averaging window is taken as no drift at all, where a relative drift error means nothing
+     * (uniform field, an orbit on a symmetry axis, a drift that reverses every half bounce).
+     */
+    static final double DRIFT_FLOOR_RHO = 0.005;
+
+    /**
+     * Convergence errors closer than this factor to the reference's own error are limited by the
+     * reference, not by the integrator, and give no order.
+     */
+    static final double REFERENCE_MARGIN = 10;
+
+    /**
+     * End-position errors below this many ρ0 are round-off (positions far from the origin in
+     * units of ρ0 times 1e-16), not truncation error, and give no order.
+     */
+    static final double ROUND_OFF_FLOOR = 1e-9;
+
+    private Assembly() {}
+
+    static CaseResult assemble(CaseRunner.Plan p) {
+        Field f = p.rc.field();
+        double rho = p.rc.rho0();
+        int nph = p.x0.length;
+        List<ResultRow> rows = new ArrayList<>();
+        double foSelf = distance(p.foRef[0].finalX(), p.foTight.finalX()) / rho;
+        double convSelf = p.convRef == null ? Double.NaN : distance(p.convRef.finalX(), p.convTight.finalX()) / rho;
+        double gcSelf = distance(p.gcRef.finalX(), p.gcTight.finalX()) / rho;
+
+        for (int i = 0; i < p.pushers.size(); i++) {
+            Map<String, double[]> m = newMetrics(nph);
+            Map<String, double[]> inv = new LinkedHashMap<>();
+            List<String> invNames = p.fo[i][0].invariants().names();
+            for (String name : invNames) {
+                inv.put(name, new double[nph]);
+            }
+            OrbitClass[] cls = new OrbitClass[nph];
+            OrbitClass[] refCls = new OrbitClass[nph];
+            OrbitStatus[] st = new OrbitStatus[nph];
+            double[] ends = new double[nph];
+            double steps = 0, evals = 0, wall = 0;
+            for (int k = 0; k < nph; k++) {
+                FullOrbitRecord r = p.fo[i][k];
+                FullOrbitRecord ref = p.foRef[k];
+                GyroAverager g = r.gyro();
+                Track tr = g.centers();
+                Track refTr = ref.gyro().centers();
+                m.get("mu_change")[k] = OrbitMetrics.muChange(g);
+                m.get("mu_jump")[k] = OrbitMetrics.muJump(g);
+                m.get("energy_error")[k] = r.energy().maxError();
+                m.get("phase_error")[k] = OrbitMetrics.relative(g.frequency(), ref.gyro().frequency());
+                double[] w = OrbitMetrics.window(refTr);
+                m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
+                m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
+                bounce(m, k, f, tr, refTr);
+                for (int j = 0; j < invNames.size(); j++) {
+                    inv.get(invNames.get(j))[k] = r.invariants().maxError(j);
+                }
+                st[k] = r.outcome().status();
+                ends[k] = r.outcome().endTime();
+                cls[k] = OrbitMetrics.classify(st[k], tr);
+                refCls[k] = OrbitMetrics.classify(ref.outcome().status(), refTr);
+                steps += r.outcome().steps();
+                evals += r.outcome().fieldEvaluations();
+                wall += r.outcome().wallNanos();
+            }
+            double[] dts = {p.dt, p.dt / 2, p.dt / 4};
+            double[] errs = new double[3];
+            FullOrbitRecord[] runs = p.foConv[i];
+            for (int l = 0; l < 3; l++) {
+                errs[l] = runs[l].outcome().status() == OrbitStatus.OK && p.convRef.outcome().status() == OrbitStatus.OK
+                        ? distance(runs[l].finalX(), p.convRef.finalX()) / rho : Double.NaN;
+                wall += runs[l].outcome().wallNanos();
+            }
+            rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, inv, cls, refCls,
+                    order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall));
+        }
+
+        // guiding-center rows: the ensemble shares one guiding center, so one run stands for all phases
+        for (int gi = 0; gi < p.gcs.size(); gi++) {
+            Map<String, double[]> m = newMetrics(1);
+            GuidingCenterRecord r = p.gc[gi];
+            GuidingCenterRecord ref = p.gcRef;
+            Track tr = r.recorder().track();
+            Track refTr = ref.recorder().track();
+            m.get("energy_error")[0] = r.recorder().maxEnergyError();
+            double[] w = OrbitMetrics.window(refTr);
+            m.get("drift_error")[0] = drift(f, tr, refTr, w, rho);
+            m.get("position_error_rho")[0] = OrbitMetrics.positionError(tr, refTr, rho);
+            bounce(m, 0, f, tr, refTr);
+            OrbitStatus[] st = {r.outcome().status()};
+            double[] ends = {r.outcome().endTime()};
+            OrbitClass[] cls = {OrbitMetrics.classify(st[0], tr)};
+            OrbitClass[] refCls = {OrbitMetrics.classify(ref.outcome().status(), refTr)};
+            double wall = r.outcome().wallNanos();
+            double[] dts = {p.gcDt, p.gcDt / 2, p.gcDt / 4};
+            double[] errs = new double[3];
+            GuidingCenterRecord[] runs = {r, p.gcConv[gi][0], p.gcConv[gi][1]};
+            for (int l = 0; l < 3; l++) {
+                errs[l] = runs[l].outcome().status() == OrbitStatus.OK && ref.outcome().status() == OrbitStatus.OK
+                        ? distance(runs[l].finalX(), ref.finalX()) / rho : Double.NaN;
+                wall += l > 0 ? runs[l].outcome().wallNanos() : 0;
+            }
+            rows.add(row(p.gcs.get(gi).name(), "guiding-center", "discretisation", st, ends, m, new LinkedHashMap<>(),
+                    cls, refCls, order(dts, errs, gcSelf), dts, errs, r.outcome().steps(),
+                    r.outcome().fieldEvaluations(), wall));
+        }
+
+        // model error: guiding-center reference against the gyro-averaged full-orbit reference
+        {
+            Map<String, double[]> m = newMetrics(nph);
+            OrbitClass[] cls = new OrbitClass[nph];
+            OrbitClass[] refCls = new OrbitClass[nph];
+            OrbitStatus[] st = new OrbitStatus[nph];
+            double[] ends = new double[nph];
+            GuidingCenterRecord r = p.gcRef;
+            for (int k = 0; k < nph; k++) {
+                FullOrbitRecord ref = p.foRef[k];
+                Track tr = r.recorder().track();
+                Track refTr = ref.gyro().centers();
+                m.get("mu_change")[k] = OrbitMetrics.muChange(ref.gyro());
+                m.get("mu_jump")[k] = OrbitMetrics.muJump(ref.gyro());
+                double[] w = OrbitMetrics.window(refTr);
+                m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
+                m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
+                bounce(m, k, f, tr, refTr);
+                st[k] = r.outcome().status();
+                ends[k] = r.outcome().endTime();
+                cls[k] = OrbitMetrics.classify(st[k], tr);
+                refCls[k] = OrbitMetrics.classify(ref.outcome().status(), refTr);
+            }
+            rows.add(row("gc-reference", "guiding-center", "model", st, ends, m, new LinkedHashMap<>(), cls, refCls,
+                    Double.NaN, new double[0], new double[0], r.outcome().steps(), r.outcome().fieldEvaluations(),
+                    r.outcome().wallNanos()));
+        }
+
+        List<ReferenceSummary> refs = List.of(
+                summary("full-orbit", References.fullOrbitMethod(), p.c.referenceRtol(), foSelf,
+                        java.util.Arrays.stream(p.foRef).map(FullOrbitRecord::outcome).toList(),
+                        java.util.Arrays.stream(p.foRef).mapToDouble(r -> r.energy().maxError()).toArray(),
+                        p.foTight.outcome()),
+                summary("guiding-center", References.guidingCenterMethod(), p.c.referenceRtol(), gcSelf,
+                        List.of(p.gcRef.outcome()), new double[] {p.gcRef.recorder().maxEnergyError()},
+                        p.gcTight.outcome()));
+
+        List<CaseResult.Curve> mu = new ArrayList<>();
+        List<CaseResult.Curve> energy = new ArrayList<>();
+        mu.add(muCurve("reference", p.foRef[0].gyro()));
+        energy.add(new CaseResult.Curve("full-orbit reference", p.foRef[0].energy().series().times(),
+                p.foRef[0].energy().series().values()));
+        for (int i = 0; i < p.pushers.size(); i++) {
+            FullOrbitRecord r = p.fo[i][0];
+            mu.add(muCurve(p.pushers.get(i).name(), r.gyro()));
+            energy.add(new CaseResult.Curve(p.pushers.get(i).name(), r.energy().series().times(),
+                    r.energy().series().values()));
+        }
+        for (int g = 0; g < p.gcs.size(); g++) {
+            GuidingCenterRecord r = p.gc[g];
+            energy.add(new CaseResult.Curve(p.gcs.get(g).name(), r.recorder().energySeries().times(),
+                    r.recorder().energySeries().values()));
+        }
+        return new CaseResult(p.rc, p.tEnd, p.bounce, p.n, p.gcDt, rows, refs, mu, energy,
+                p.foRef[0].gyro().centers(), p.gcRef.recorder().track());
+    }
+
+    /**
+     * Drift error over the reference's whole-period window w, cut to the time both tracks
+     * cover (a pusher with a phase lag finishes its last whole gyration a little earlier); both
+     * tracks are averaged over the same span. NaN below {@link #DRIFT_FLOOR_RHO}.
+     */
+    private static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
+        double ta = Math.max(w[0], Math.max(tr.firstTime(), refTr.firstTime()));
+        double tb = Math.min(w[1], Math.min(tr.lastTime(), refTr.lastTime()));
+        double floor = DRIFT_FLOOR_RHO * rho / (tb - ta);
+        return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb),
+                OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb), floor);
+    }
+
+    private static Map<String, double[]> newMetrics(int nph) {
+        Map<String, double[]> m = new LinkedHashMap<>();
+        for (String name : ResultRow.METRICS) {
+            double[] v = new double[nph];
+            java.util.Arrays.fill(v, Double.NaN);
+            m.put(name, v);
+        }
+        return m;
+    }
+
+    private static void bounce(Map<String, double[]> m, int k, Field f, Track tr, Track refTr) {
+        double tb = OrbitMetrics.bouncePeriod(tr);
+        double bm = OrbitMetrics.mirrorField(f, tr);
+        m.get("bounce_period_s")[k] = tb;
+        m.get("bounce_period_error")[k] = OrbitMetrics.relative(tb, OrbitMetrics.bouncePeriod(refTr));
+        m.get("mirror_field_t")[k] = bm;
+        m.get("mirror_field_error")[k] = OrbitMetrics.relative(bm, OrbitMetrics.mirrorField(f, refTr));
+    }
+
+    private static ResultRow row(String name, String model, String kind, OrbitStatus[] st, double[] ends,
+                                 Map<String, double[]> m, Map<String, double[]> inv, OrbitClass[] cls,
+                                 OrbitClass[] refCls, double order, double[] dts, double[] errs,
+                                 double steps, double evals, double wallNanos) {
+        OrbitStatus worst = OrbitStatus.OK;
+        for (OrbitStatus s : st) {
+            if (severity(s) > severity(worst)) {
+                worst = s;
+            }
+        }
+        double when = Double.NaN;
+        if (worst != OrbitStatus.OK) {
+            for (int k = 0; k < st.length; k++) {
+                if (st[k] == worst && !(ends[k] >= when)) {
+                    when = ends[k];
+                }
+            }
+        }
+        Map<String, Stat> metrics = new LinkedHashMap<>();
+        m.forEach((key, v) -> metrics.put(key, Stat.of(v)));
+        Map<String, Stat> invariants = new LinkedHashMap<>();
+        inv.forEach((key, v) -> invariants.put(key, Stat.of(v)));
+        TreeSet<OrbitClass> seen = new TreeSet<>();
+        int agree = 0;
+        for (int k = 0; k < cls.length; k++) {
+            seen.add(cls[k]);
+            agree += cls[k] == refCls[k] ? 1 : 0;
+        }
+        String classes = String.join("/", seen.stream().map(OrbitClass::label).toList());
+        return new ResultRow(name, model, kind, worst.label(), when, metrics, invariants, classes,
+                (double) agree / cls.length, order, dts, errs, steps < 0 ? Double.NaN : steps, evals, wallNanos * 1e-9);
+    }
+
+    private static int severity(OrbitStatus s) {
+        return switch (s) {
+            case OK -> 0;
+            case LOST -> 1;
+            case MODEL_FAILURE -> 2;
+            case UNSTABLE -> 3;
+        };
+    }
+
+    /**
+     * Least-squares slope of log(error) against log(dt); NaN when a run failed or an error is
+     * within {@link #REFERENCE_MARGIN} of the reference's own error or below {@link #ROUND_OFF_FLOOR}.
+     */
+    static double order(double[] dts, double[] errs, double referenceError) {
+        SimpleRegression reg = new SimpleRegression();
+        for (int l = 0; l < dts.length; l++) {
+            if (!(errs[l] > Math.max(REFERENCE_MARGIN * referenceError, ROUND_OFF_FLOOR)) || !Double.isFinite(errs[l])) {
+                return Double.NaN;
+            }
+            reg.addData(Math.log(dts[l]), Math.log(errs[l]));
+        }
+        return reg.getSlope();
+    }
+
+    /**
+     * A reference over the ensemble. @param outcomes one per phase @param energyErrors its own
+     * energy error per phase @param tight the self-estimate run (its time counts as cost)
+     */
+    private static ReferenceSummary summary(String model, String method, double rtol, double self,
+                                            List<Outcome> outcomes, double[] energyErrors, Outcome tight) {
+        double steps = 0;
+        double evals = 0;
+        double wall = tight.wallNanos();
+        OrbitStatus worst = OrbitStatus.OK;
+        for (Outcome o : outcomes) {
+            steps += o.steps();
+            evals += o.fieldEvaluations();
+            wall += o.wallNanos();
+            if (severity(o.status()) > severity(worst)) {
+                worst = o.status();
+            }
+        }
+        int n = outcomes.size();
+        return new ReferenceSummary(model, method, rtol, self, Stat.of(energyErrors).mean(), worst.label(),
+                steps < 0 ? Double.NaN : steps / n, evals / n, wall * 1e-9);
+    }
+
+    private static CaseResult.Curve muCurve(String label, GyroAverager g) {
+        int n = g.gyrations();
+        double[] t = new double[n];
+        double[] y = new double[n];
+        for (int k = 0; k < n; k++) {
+            t[k] = g.centers().time(k);
+            y[k] = g.mu(k) / g.mu(0) - 1.0;
+        }
+        return new CaseResult.Curve(label, t, y);
+    }
+
+    static double distance(double[] a, double[] b) {
+        double dx = a[0] - b[0], dy = a[1] - b[1], dz = a[2] - b[2];
+        return Math.sqrt(dx * dx + dy * dy + dz * dz);
+    }
+}

@@ -1,0 +1,293 @@
+package org.twinorbit.harness.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.twinorbit.harness.BadInputException;
+import org.twinorbit.harness.cases.Case;
+import org.twinorbit.harness.cases.DurationUnit;
+import org.twinorbit.harness.cases.ResolvedCase;
+import org.twinorbit.integrators.FullOrbitPusher;
+import org.twinorbit.integrators.GuidingCenterIntegrator;
+import org.twinorbit.integrators.GuidingCenterResult;
+import org.twinorbit.integrators.GuidingCenterState;
+import org.twinorbit.integrators.GyroParticle;
+import org.twinorbit.integrators.GyroPlacement;
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.shared.Relativity;
+
+/**
+ * Runs cases: every chosen integrator and both references on the gyrophase ensemble, plus the
+ * runs at dt/2 and dt/4 that measure the convergence order and the references at a 100× tighter
+ * tolerance that estimate their own error. All orbits of all cases are independent jobs for one
+ * {@link Parallel} pool; each writes its own slot, and the results are assembled afterwards in a
+ * fixed order, so the numbers do not depend on the thread count.
+ *
+ * <p>Every case is resolved and checked before any orbit runs, so bad input costs nothing.
+ */
+public final class CaseRunner {
+
+    /** Samples per initial gyroperiod taken from the references' dense output. */
+    static final int REFERENCE_SAMPLES_PER_GYRO = 32;
+    /** Points kept per plotted curve. */
+    static final int PLOT_POINTS = 600;
+    /** Factor by which the self-estimate runs tighten the reference tolerance (DESIGN.md). */
+    static final double TIGHTER = 100;
+    /** Longest guiding-center run that looks for a bounce period (initial gyroperiods). */
+    static final double BOUNCE_SEARCH_GYRO = 20000;
+    /**
+     * |v∥| below this fraction of the speed counts as zero when looking for mirror points: far
+     * above round-off of a reference, far below the v∥ of any orbit that really mirrors in a run.
+     */
+    static final double DEADBAND = 1e-6;
+    /**
+     * Span of the full-orbit convergence runs (initial gyroperiods). Short, because the
+     * end-position error of a pusher is dominated by its phase error, which grows linearly in
+     * time until it saturates at ~2ρ0; within a few gyrations it stays in the asymptotic regime
+     * where halving dt divides it by 2^order.
+     */
+    static final double CONVERGENCE_GYRO = 4;
+    /** Estimated cost of one full-orbit reference sample, in pusher steps (for job ordering only). */
+    static final double FO_REFERENCE_SAMPLE = 11;
+    /** Estimated cost of one guiding-center reference sample, in pusher steps. */
+    static final double GC_REFERENCE_SAMPLE = 3;
+    /** Estimated cost of one fixed guiding-center step, in pusher steps. */
+    static final double GC_STEP = 6;
+
+    private final int threads;
+    private final boolean quiet;
+
+    /** @param threads worker threads (≥ 1) @param quiet no progress bar */
+    public CaseRunner(int threads, boolean quiet) {
+        if (threads < 1) {
+            throw new IllegalArgumentException("--threads: must be at least 1, got " + threads);
+        }
+        this.threads = threads;
+        this.quiet = quiet;
+    }
+
+    /** Runs one case. */
+    public CaseResult run(Case c) {
+        return run(List.of(c)).get(0);
+    }
+
+    /** Runs several cases on one pool; results in the order of the cases. */
+    public List<CaseResult> run(List<Case> cases) {
+        return run(cases, r -> { });
+    }
+
+    /**
+     * Runs several cases on one pool; results in the order of the cases. {@code onCase} receives
+     * each case's result as soon as all of its orbits are done (in completion order, from a
+     * worker thread), so that a caller can save partial results of a long run.
+     */
+    public List<CaseResult> run(List<Case> cases, java.util.function.Consumer<CaseResult> onCase) {
+        List<Plan> plans = new ArrayList<>();
+        for (Case c : cases) {
+            plans.add(new Plan(new ResolvedCase(c)));
+        }
+        List<Parallel.Job> pre = new ArrayList<>();
+        for (Plan p : plans) {
+            if (p.c.durationUnit() == DurationUnit.BOUNCES) {
+                pre.add(new Parallel.Job(1, p::measureBounce));
+            }
+        }
+        if (!pre.isEmpty()) {
+            new Parallel(threads, quiet, "bounce periods").run(pre);
+        }
+        List<Parallel.Job> jobs = new ArrayList<>();
+        for (Plan p : plans) {
+            p.schedule();
+            List<Parallel.Job> own = new ArrayList<>();
+            p.addJobs(own);
+            // the job that finishes a case assembles it; the counter orders the slots' writes before it
+            java.util.concurrent.atomic.AtomicInteger left = new java.util.concurrent.atomic.AtomicInteger(own.size());
+            for (Parallel.Job j : own) {
+                jobs.add(new Parallel.Job(j.cost(), () -> {
+                    j.work().run();
+                    if (left.decrementAndGet() == 0) {
+                        p.result = Assembly.assemble(p);
+                        onCase.accept(p.result);
+                    }
+                }));
+            }
+        }
+        new Parallel(threads, quiet, cases.size() == 1 ? "orbits" : "cases").run(jobs);
+        List<CaseResult> out = new ArrayList<>();
+        for (Plan p : plans) {
+            out.add(p.result);
+        }
+        return out;
+    }
+
+    /** One case: its setup, its jobs and their result slots. */
+    static final class Plan {
+        final ResolvedCase rc;
+        final Case c;
+        /** Particles of the gyrophase ensemble: positions (m) and u = γv (m/s). */
+        final double[][] x0;
+        final double[][] u0;
+        /** The guiding center they share: position (m), p∥ (kg m/s), μ (J/T). */
+        final double[] gc0;
+        final double pPar0;
+        final double mu;
+        final List<FullOrbitPusher> pushers = new ArrayList<>();
+        final List<GuidingCenterIntegrator> gcs = new ArrayList<>();
+        final double speed;
+        final double deadband;
+        double bounce = Double.NaN;
+        double tEnd;
+        long n;
+        double dt;
+        long gcN;
+        double gcDt;
+        long samples;
+        long convN;
+
+        FullOrbitRecord[][] fo;
+        FullOrbitRecord[][] foConv;
+        FullOrbitRecord[] foRef;
+        FullOrbitRecord foTight;
+        CaseResult result;
+        FullOrbitRecord convRef;
+        FullOrbitRecord convTight;
+        GuidingCenterRecord[] gc;
+        GuidingCenterRecord[][] gcConv;
+        GuidingCenterRecord gcRef;
+        GuidingCenterRecord gcTight;
+
+        Plan(ResolvedCase rc) {
+            this.rc = rc;
+            this.c = rc.spec();
+            for (String name : c.pushers()) {
+                pushers.add(Registry.pusher(name));
+            }
+            for (String name : c.gcIntegrators()) {
+                gcs.add(Registry.guidingCenter(name));
+            }
+            double u = Relativity.uFromKinetic(rc.species(), rc.energyEv());
+            this.speed = u / rc.gamma();
+            this.deadband = DEADBAND * speed;
+            GuidingCenterState g = rc.initial().guidingCenter();
+            gc0 = g.position().toArray();
+            pPar0 = g.parallelMomentum();
+            mu = g.mu();
+            List<GyroParticle> ring = rc.initial().particles(c.phases(), GyroPlacement.ZEROTH_EXB);
+            x0 = new double[ring.size()][];
+            u0 = new double[ring.size()][];
+            for (int k = 0; k < ring.size(); k++) {
+                x0[k] = ring.get(k).position().toArray();
+                u0[k] = ring.get(k).u().toArray();
+                double[] x = x0[k];
+                if (!rc.field().inDomain(x[0], x[1], x[2])) {
+                    throw new IllegalArgumentException("start: the particle of gyrophase " + k
+                            + " lies outside the domain of field '" + c.field() + "' ("
+                            + rc.field().domainMeaning() + "); move the start or lower the energy");
+                }
+            }
+        }
+
+        /** Runs the guiding-center reference until it has mirrored often enough to give T_b. */
+        void measureBounce() {
+            double span = BOUNCE_SEARCH_GYRO * rc.gyroPeriod();
+            GuidingCenterRecord r = References.guidingCenter(rc.field(), rc.species(), mu, gc0, pPar0,
+                    span, (long) BOUNCE_SEARCH_GYRO, c.referenceRtol(), 1, deadband, 3);
+            List<GuidingCenterResult.MirrorPoint> mp = r.mirrorPoints();
+            // the first and third mirror points are one bounce apart (same side, same direction)
+            bounce = mp.size() >= 3 && r.outcome().status() == OrbitStatus.OK
+                    ? mp.get(2).time() - mp.get(0).time() : Double.NaN;
+        }
+
+        /** Fixes the end time and the steps. */
+        void schedule() {
+            double unit = rc.gyroPeriod();
+            if (c.durationUnit() == DurationUnit.BOUNCES) {
+                if (!(bounce > 0)) {
+                    throw new BadInputException("duration-unit: the orbit of case '" + c.name()
+                            + "' does not bounce (it is passing or lost); give the duration in gyroperiods");
+                }
+                unit = bounce;
+            }
+            dt = rc.fullOrbitStep();
+            n = Math.max(1, (long) Math.ceil(c.duration() * unit / dt - 1e-9));
+            tEnd = n * dt;
+            samples = Math.max(1, (long) Math.ceil(tEnd / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO - 1e-9));
+            gcN = Math.max(1, (long) Math.ceil(tEnd / (c.gcStepGyro() * rc.gyroPeriod()) - 1e-9));
+            gcDt = tEnd / gcN;
+            convN = Math.min(n, Math.max(1, (long) Math.ceil(CONVERGENCE_GYRO * c.stepsPerGyro() - 1e-9)));
+        }
+
+        void addJobs(List<Parallel.Job> jobs) {
+            int np = pushers.size();
+            int ng = gcs.size();
+            int nph = x0.length;
+            fo = new FullOrbitRecord[np][nph];
+            foConv = new FullOrbitRecord[np][3];
+            foRef = new FullOrbitRecord[nph];
+            gc = new GuidingCenterRecord[ng];
+            gcConv = new GuidingCenterRecord[ng][2];
+            int stride = (int) Math.max(1, n / PLOT_POINTS);
+            int refStride = (int) Math.max(1, samples / PLOT_POINTS);
+            int gcStride = (int) Math.max(1, gcN / PLOT_POINTS);
+            // job costs in units of one full-orbit pusher step (with its observers), measured on
+            // the dipole: a full-orbit reference sample ~11, a guiding-center reference sample ~3,
+            // a guiding-center RK4 step ~6; the tighter self-estimate runs cost about twice as much
+            double refCost = samples * FO_REFERENCE_SAMPLE;
+            for (int k = 0; k < nph; k++) {
+                int kk = k;
+                jobs.add(new Parallel.Job(refCost, () -> foRef[kk] = References.fullOrbit(rc.field(), rc.species(),
+                        x0[kk], u0[kk], tEnd, samples, c.referenceRtol(), refStride, deadband)));
+                for (int i = 0; i < np; i++) {
+                    int ii = i;
+                    jobs.add(new Parallel.Job(n, () -> fo[ii][kk] = Orbits.push(pushers.get(ii), rc.field(),
+                            rc.species(), x0[kk], u0[kk], dt, n, stride, deadband)));
+                }
+            }
+            // the zeroth-order ring shares one guiding center: its runs are done once
+            jobs.add(new Parallel.Job(samples * GC_REFERENCE_SAMPLE, () -> gcRef = References.guidingCenter(rc.field(),
+                    rc.species(), mu, gc0, pPar0, tEnd, samples, c.referenceRtol(), refStride, deadband, 0)));
+            for (int g = 0; g < ng; g++) {
+                int gg = g;
+                jobs.add(new Parallel.Job(gcN * GC_STEP, () -> gc[gg] = Orbits.advance(gcs.get(gg), rc.field(),
+                        rc.species(), mu, gc0, pPar0, gcDt, gcN, gcStride, deadband)));
+            }
+            jobs.add(new Parallel.Job(refCost * 2, () -> foTight = References.fullOrbit(rc.field(), rc.species(),
+                    x0[0], u0[0], tEnd, samples, References.tighter(c.referenceRtol()), refStride, deadband)));
+            jobs.add(new Parallel.Job(samples * GC_REFERENCE_SAMPLE * 2, () -> gcTight = References.guidingCenter(rc.field(), rc.species(),
+                    mu, gc0, pPar0, tEnd, samples, References.tighter(c.referenceRtol()), refStride, deadband, 0)));
+            long convSamples = Math.max(1, (long) Math.ceil(convN * dt / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO));
+            if (np == 0) {
+                addGuidingCenterConvergence(jobs, ng);
+                return;
+            }
+            jobs.add(new Parallel.Job(convSamples * FO_REFERENCE_SAMPLE, () -> convRef = References.fullOrbit(rc.field(), rc.species(),
+                    x0[0], u0[0], convN * dt, convSamples, c.referenceRtol(), 1, deadband)));
+            jobs.add(new Parallel.Job(convSamples * FO_REFERENCE_SAMPLE * 2, () -> convTight = References.fullOrbit(rc.field(),
+                    rc.species(), x0[0], u0[0], convN * dt, convSamples, References.tighter(c.referenceRtol()), 1,
+                    deadband)));
+            for (int i = 0; i < np; i++) {
+                for (int level = 0; level < 3; level++) {
+                    int ii = i;
+                    int ll = level;
+                    long m = convN << level;
+                    jobs.add(new Parallel.Job(m, () -> foConv[ii][ll] = Orbits.push(pushers.get(ii), rc.field(),
+                            rc.species(), x0[0], u0[0], dt / (1 << ll), m, (int) Math.max(1, m / PLOT_POINTS),
+                            deadband)));
+                }
+            }
+            addGuidingCenterConvergence(jobs, ng);
+        }
+
+        private void addGuidingCenterConvergence(List<Parallel.Job> jobs, int ng) {
+            for (int g = 0; g < ng; g++) {
+                for (int level = 0; level < 2; level++) {
+                    int gg = g;
+                    int ll = level;
+                    long m = gcN << (level + 1);
+                    jobs.add(new Parallel.Job(m * GC_STEP, () -> gcConv[gg][ll] = Orbits.advance(gcs.get(gg), rc.field(),
+                            rc.species(), mu, gc0, pPar0, gcDt / (1 << (ll + 1)), m,
+                            (int) Math.max(1, m / PLOT_POINTS), deadband)));
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,47 @@
+package org.twinorbit.harness.run;
+
+import java.util.List;
+import org.twinorbit.integrators.FullOrbitPusher;
+import org.twinorbit.integrators.GuidingCenterIntegrator;
+import org.twinorbit.integrators.GuidingCenterIntegrators;
+import org.twinorbit.integrators.Pushers;
+
+/** The integrators on the class path by name, with messages that name the harness option. */
+public final class Registry {
+
+    private Registry() {}
+
+    public static List<FullOrbitPusher> pushers() {
+        return Pushers.all();
+    }
+
+    public static List<GuidingCenterIntegrator> guidingCenterIntegrators() {
+        return GuidingCenterIntegrators.all();
+    }
+
+    public static List<String> pusherNames() {
+        return Pushers.names();
+    }
+
+    public static List<String> guidingCenterNames() {
+        return guidingCenterIntegrators().stream().map(GuidingCenterIntegrator::name).toList();
+    }
+
+    /** @throws IllegalArgumentException naming --pushers and the allowed names */
+    public static FullOrbitPusher pusher(String name) {
+        try {
+            return Pushers.byName(name);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("pushers: " + e.getMessage(), e);
+        }
+    }
+
+    /** @throws IllegalArgumentException naming --gc-integrators and the allowed names */
+    public static GuidingCenterIntegrator guidingCenter(String name) {
+        try {
+            return GuidingCenterIntegrators.byName(name);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("gc-integrators: " + e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,29 @@
+package org.twinorbit.harness;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+/** Results do not depend on the number of threads: serial and parallel runs print the same JSON. */
+class ThreadCountTest {
+
+    @Test
+    void serialAndParallelJsonAreIdentical() {
+        String[] base = {"run", "--quiet", "--json", "--field", "dipole", "--eps", "0.03", "--pitch", "50",
+            "--phases", "4", "--duration", "1", "--duration-unit", "bounces", "--pushers", "boris,rk4"};
+        CommandLineTest.Outcome one = CommandLineTest.exec(concat(base, "--threads", "1"));
+        CommandLineTest.Outcome three = CommandLineTest.exec(concat(base, "--threads", "3"));
+        assertEquals(0, one.code(), one.err());
+        assertEquals(0, three.code(), three.err());
+        assertTrue(one.out().contains("\"error_kind\" : \"model\""), one.out());
+        assertEquals(one.out(), three.out());
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] r = new String[a.length + b.length];
+        System.arraycopy(a, 0, r, 0, a.length);
+        System.arraycopy(b, 0, r, a.length, b.length);
+        return r;
+    }
+}
