@@ -202,6 +202,22 @@ public final class OrbitMetrics {
         return t.allMirrorTimes().length > 0 ? OrbitClass.TRAPPED : OrbitClass.PASSING;
     }
 
+    /**
+     * Phase error of a full orbit against its reference: the mean gyrofrequency measured over
+     * the same time window for both, from the first sample to the last time both reached, as
+     * the ratio of the signed gyrophases turned in it, minus 1. Counting whole gyrations instead
+     * would compare windows that differ by up to a gyration wherever Ω varies along the orbit.
+     * NaN when the window holds less than one gyration of the reference.
+     */
+    public static double phaseError(GyroAverager g, GyroAverager ref) {
+        double t = Math.min(g.lastTime(), ref.lastTime());
+        double phiRef = ref.phaseAt(t);
+        if (!(phiRef >= 2 * Math.PI) || g.firstTime() != ref.firstTime()) {
+            return Double.NaN;
+        }
+        return g.phaseAt(t) / phiRef - 1.0;
+    }
+
     /** Relative difference a/b − 1; NaN when either is NaN or b is 0. */
     public static double relative(double a, double b) {
         return b == 0 ? Double.NaN : a / b - 1.0;

@@ -67,7 +67,7 @@ final class Assembly {
                 m.get("mu_change")[k] = OrbitMetrics.muChange(g);
                 m.get("mu_jump")[k] = OrbitMetrics.muJump(g);
                 m.get("energy_error")[k] = r.energy().maxError();
-                m.get("phase_error")[k] = OrbitMetrics.relative(g.frequency(), ref.gyro().frequency());
+                m.get("phase_error")[k] = OrbitMetrics.phaseError(g, ref.gyro());
                 double[] w = OrbitMetrics.window(refTr);
                 m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
                 m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
