@@ -199,7 +199,7 @@ final class Assembly {
      * similar sampling keep their own samples, since reading one at the other's times would put
      * its points on its chords. NaN below {@link #DRIFT_FLOOR_RHO}.
      */
-    private static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
+    static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
         double ta = Math.max(w[0], Math.max(tr.firstTime(), refTr.firstTime()));
         double tb = Math.min(w[1], Math.min(tr.lastTime(), refTr.lastTime()));
         double floor = DRIFT_FLOOR_RHO * rho / (tb - ta);
