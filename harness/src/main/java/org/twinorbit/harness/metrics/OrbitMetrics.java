@@ -187,7 +187,10 @@ public final class OrbitMetrics {
         return ev.length < 2 ? Double.NaN : (ev[ev.length - 1] - ev[0]) / (ev.length - 1);
     }
 
-    /** Mean |B| (T) at the mirror points (both directions) of a track; NaN without one. */
+    /**
+     * Mean |B| (T) at the mirror points (both directions) of a track, the position there read
+     * from a parabola through the nearest samples; NaN without one.
+     */
     public static double mirrorField(Field field, Track t) {
         double[] ev = t.allMirrorTimes();
         if (ev.length == 0) {
@@ -197,7 +200,7 @@ public final class OrbitMetrics {
         double[] p = new double[3];
         double sum = 0;
         for (double e : ev) {
-            t.positionAt(e, p);
+            t.positionSmooth(e, p);
             field.evaluate(e, p[0], p[1], p[2], fs);
             sum += fs.bMag();
         }
