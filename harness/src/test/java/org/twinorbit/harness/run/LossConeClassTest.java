@@ -15,8 +15,8 @@ class LossConeClassTest {
 
     @Test
     void lostInTheLossConeIsNotAProblem() {
-        // Rm = 4 (DESIGN.md default): loss cone sin²α < B_min/B_max = 1/4, α < 30° (common
-        // practice); a pitch of 20° escapes past |z| = Lm within a bounce-free transit
+        // Rm = 4 (DESIGN.md default): loss cone sin²α < B_min/B_max = 1/4, α < 30°
+        // (common practice); a pitch of 20° escapes past |z| = Lm within a bounce-free transit
         CaseSpec s = TestCases.spec("mirror", "boris", "gc-rk4");
         s.eps = 0.02;
         s.pitch = 20.0;
