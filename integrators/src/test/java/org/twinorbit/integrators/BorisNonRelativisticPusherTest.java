@@ -1,5 +1,10 @@
 package org.twinorbit.integrators;
 
+/**
+ * The non-relativistic Boris variant through the leapfrog family's checks (rotation angle
+ * 2·atan(Ω dt/2): Birdsall & Langdon (1991); volume preservation: Qin et al. (2013)); sources and
+ * tolerances are named beside each check in {@link AbstractLeapfrogPusherTest}.
+ */
 class BorisNonRelativisticPusherTest extends AbstractLeapfrogPusherTest {
     @Override FullOrbitPusher pusher() { return new BorisNonRelativisticPusher(); }
 

@@ -16,6 +16,12 @@ import org.twinorbit.shared.Species;
  * of v∥ are taken with the trapezoidal rule, split exactly at the crossings, so that no
  * partial gyration enters a mean (DESIGN.md "What is measured").
  *
+ * <p>Beside the whole gyrations it accumulates the signed gyrophase (positive in the sense the
+ * charge gyrates), from which the mean gyrofrequency over any window is read: comparing two runs
+ * over the same time window measures their phase error without depending on how many whole
+ * gyrations each happens to complete in it (where Ω varies along the orbit, a window one
+ * gyration longer shifts the mean frequency by ~ (Ω_end − ⟨Ω⟩)/N).
+ *
  * <p>Needs a sampling of at least 4 samples per gyration so that one step turns w by less than
  * π. Allocates only when a gyration completes.
  */
@@ -39,6 +45,9 @@ public final class GyroAverager implements FullOrbitObserver {
     private boolean started;
     private double tPrev;
     private double phase;
+    /** Signed gyrophase turned since the first sample (rad), positive in the charge's sense. */
+    private double turned;
+    private double lastTime;
     private double gyrationStart;
     private double firstTime;
     private int completed;
@@ -46,6 +55,10 @@ public final class GyroAverager implements FullOrbitObserver {
     private final Track centers;
     private double[] mu = new double[64];
     private double[] ends = new double[64];
+    /** Signed gyrophase (rad) at the end of each gyration. */
+    private double[] turnedAtEnd = new double[64];
+    /** +1 for a positive charge: its w turns clockwise about b, (w0 × w1)·b < 0. */
+    private final double sense;
 
     /** @param deadband |v∥| (m/s) treated as zero when looking for mirror points (see {@link Track}) */
     public GyroAverager(Field field, Species species, double deadband) {
@@ -53,6 +66,7 @@ public final class GyroAverager implements FullOrbitObserver {
         this.centers = new Track(deadband);
         this.mass = species.mass();
         this.charge = species.charge();
+        this.sense = -Math.signum(charge);
     }
 
     @Override
@@ -62,6 +76,7 @@ public final class GyroAverager implements FullOrbitObserver {
             started = true;
             gyrationStart = t;
             firstTime = t;
+            lastTime = t;
             tPrev = t;
             System.arraycopy(q1, 0, q0, 0, NQ);
             System.arraycopy(w1, 0, w0, 0, 3);
@@ -72,12 +87,14 @@ public final class GyroAverager implements FullOrbitObserver {
         double cx = w0[1] * w1[2] - w0[2] * w1[1];
         double cy = w0[2] * w1[0] - w0[0] * w1[2];
         double cz = w0[0] * w1[1] - w0[1] * w1[0];
-        double dphi = Math.abs(Math.atan2(cx * b1[0] + cy * b1[1] + cz * b1[2],
-                w0[0] * w1[0] + w0[1] * w1[1] + w0[2] * w1[2]));
+        double signed = sense * Math.atan2(cx * b1[0] + cy * b1[1] + cz * b1[2],
+                w0[0] * w1[0] + w0[1] * w1[1] + w0[2] * w1[2]);
+        double dphi = Math.abs(signed);
         double target = TWO_PI * (completed + 1);
         if (dphi > 0 && phase + dphi >= target) {
             double f = (target - phase) / dphi;
             double tc = tPrev + f * dt;
+            mark(turned + f * signed);
             for (int k = 0; k < NQ; k++) {
                 double qc = q0[k] + f * (q1[k] - q0[k]);
                 acc[k] += 0.5 * (q0[k] + qc) * f * dt;
@@ -90,17 +107,25 @@ public final class GyroAverager implements FullOrbitObserver {
             acc[k] += 0.5 * (q0[k] + q1[k]) * dt;
         }
         phase += dphi;
+        turned += signed;
         tPrev = t;
+        lastTime = t;
         System.arraycopy(q1, 0, q0, 0, NQ);
         System.arraycopy(w1, 0, w0, 0, 3);
     }
 
-    private void close(double tc) {
-        double span = tc - gyrationStart;
+    /** Keeps the signed phase (rad) at the end of the gyration about to close. */
+    private void mark(double signedPhase) {
         if (completed == mu.length) {
             mu = Arrays.copyOf(mu, 2 * completed);
             ends = Arrays.copyOf(ends, 2 * completed);
+            turnedAtEnd = Arrays.copyOf(turnedAtEnd, 2 * completed);
         }
+        turnedAtEnd[completed] = signedPhase;
+    }
+
+    private void close(double tc) {
+        double span = tc - gyrationStart;
         mu[completed] = acc[0] / span;
         ends[completed] = tc;
         centers.add(0.5 * (gyrationStart + tc), acc[1] / span, acc[2] / span, acc[3] / span, acc[4] / span);
@@ -153,11 +178,54 @@ public final class GyroAverager implements FullOrbitObserver {
         return centers;
     }
 
+    /** Time (s) of the first sample; NaN before any. */
+    public double firstTime() {
+        return started ? firstTime : Double.NaN;
+    }
+
+    /** Time (s) of the last sample; NaN before any. */
+    public double lastTime() {
+        return started ? lastTime : Double.NaN;
+    }
+
     /**
-     * Measured mean gyrofrequency (rad/s): 2π per whole gyration between the first sample and
-     * the end of the last whole gyration; NaN with fewer than one gyration.
+     * Signed gyrophase (rad) turned between the first sample and time t (s): exact at the
+     * samples' end and at every gyration end, linear in time between gyration ends (a window
+     * that ends inside a gyration is off by the phase's non-uniformity within that one
+     * gyration); NaN outside [first sample, last sample].
+     */
+    public double phaseAt(double t) {
+        if (!started || t < firstTime || t > lastTime) {
+            return Double.NaN;
+        }
+        if (t == lastTime) {
+            return turned;
+        }
+        int i = Arrays.binarySearch(ends, 0, completed, t);
+        if (i >= 0) {
+            return turnedAtEnd[i];
+        }
+        int hi = -i - 1;
+        double ta = hi == 0 ? firstTime : ends[hi - 1];
+        double pa = hi == 0 ? 0.0 : turnedAtEnd[hi - 1];
+        double tb = hi == completed ? lastTime : ends[hi];
+        double pb = hi == completed ? turned : turnedAtEnd[hi];
+        return pa + (pb - pa) * (t - ta) / (tb - ta);
+    }
+
+    /**
+     * Measured mean gyrofrequency (rad/s) over [first sample, t]: the signed gyrophase turned
+     * divided by the time; NaN when t is not after the first sample or past the last.
+     */
+    public double frequencyUntil(double t) {
+        return t > firstTime ? phaseAt(t) / (t - firstTime) : Double.NaN;
+    }
+
+    /**
+     * Measured mean gyrofrequency (rad/s) over the whole run: the signed gyrophase turned
+     * between the first and the last sample over their time; NaN with fewer than one gyration.
      */
     public double frequency() {
-        return completed == 0 ? Double.NaN : TWO_PI * completed / (ends[completed - 1] - firstTime);
+        return completed == 0 ? Double.NaN : frequencyUntil(lastTime);
     }
 }

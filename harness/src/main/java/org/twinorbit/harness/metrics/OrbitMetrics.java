@@ -97,6 +97,18 @@ public final class OrbitMetrics {
      * divided by the time span. NaN when the track does not cover the window.
      */
     public static double[] meanPerpendicularVelocity(Field field, Track track, double ta, double tb) {
+        return meanPerpendicularVelocity(field, track, ta, tb, track);
+    }
+
+    /**
+     * As {@link #meanPerpendicularVelocity(Field, Track, double, double)}, but with the track read
+     * (interpolated) at the sample times of {@code grid} inside [ta, tb]. Two tracks compared on
+     * the same grid have the same chords: removing the parallel part of a chord with b at its
+     * midpoint leaves a residue of relative order (chord · field-line curvature)², which on a
+     * helical field line does not vanish and would otherwise differ between a track sampled once
+     * per gyration and one sampled 32 times.
+     */
+    public static double[] meanPerpendicularVelocity(Field field, Track track, double ta, double tb, Track grid) {
         double[] v = {Double.NaN, Double.NaN, Double.NaN};
         if (track.size() < 2 || !(tb > ta) || ta < track.firstTime() - 1e-9 * (tb - ta)
                 || tb > track.lastTime() + 1e-9 * (tb - ta)) {
@@ -109,17 +121,15 @@ public final class OrbitMetrics {
         double[] cur = new double[3];
         double sx = 0, sy = 0, sz = 0;
         int i = 0;
-        while (i < track.size() && track.time(i) <= ta) {
+        while (i < grid.size() && grid.time(i) <= ta) {
             i++;
         }
         boolean last = false;
         while (!last) {
             double t;
-            if (i < track.size() && track.time(i) < tb) {
-                t = track.time(i);
-                cur[0] = track.coord(i, 0);
-                cur[1] = track.coord(i, 1);
-                cur[2] = track.coord(i, 2);
+            if (i < grid.size() && grid.time(i) < tb) {
+                t = grid.time(i);
+                track.positionAt(t, cur);
                 i++;
             } else {
                 t = tb;
@@ -177,7 +187,10 @@ public final class OrbitMetrics {
         return ev.length < 2 ? Double.NaN : (ev[ev.length - 1] - ev[0]) / (ev.length - 1);
     }
 
-    /** Mean |B| (T) at the mirror points (both directions) of a track; NaN without one. */
+    /**
+     * Mean |B| (T) at the mirror points (both directions) of a track, the position there read
+     * from a parabola through the nearest samples; NaN without one.
+     */
     public static double mirrorField(Field field, Track t) {
         double[] ev = t.allMirrorTimes();
         if (ev.length == 0) {
@@ -187,7 +200,7 @@ public final class OrbitMetrics {
         double[] p = new double[3];
         double sum = 0;
         for (double e : ev) {
-            t.positionAt(e, p);
+            t.positionSmooth(e, p);
             field.evaluate(e, p[0], p[1], p[2], fs);
             sum += fs.bMag();
         }
@@ -200,6 +213,27 @@ public final class OrbitMetrics {
             return OrbitClass.LOST;
         }
         return t.allMirrorTimes().length > 0 ? OrbitClass.TRAPPED : OrbitClass.PASSING;
+    }
+
+    /**
+     * Phase error of a full orbit against its reference: the mean gyrofrequency measured over
+     * the same time window for both — from the first sample to the last sample both reached —
+     * as the ratio of the signed gyrophases turned in it, minus 1. Both phases are exact sample
+     * values there, so where Ω varies along the orbit the result is the Ω-weighted mean of the
+     * local error, smooth in dt. Counting whole gyrations instead compared windows that differ
+     * by up to a gyration, and reading a phase between gyration ends is off by ~Ω̇T_g²/8, which
+     * in a mirror is as large as the whole lag at 64 steps per gyration. What remains: where Ω
+     * varies around the gyration (a gradient across the orbit) the phase ripples by O(ε) rad,
+     * and the two runs, a lag apart, sit at different points of that ripple — an error of
+     * relative order ε in the phase error. NaN when the reference turned less than one gyration.
+     */
+    public static double phaseError(GyroAverager g, GyroAverager ref) {
+        double t = Math.min(g.lastTime(), ref.lastTime());
+        double phiRef = ref.phaseAt(t);
+        if (!(phiRef >= 2 * Math.PI) || g.firstTime() != ref.firstTime()) {
+            return Double.NaN;
+        }
+        return g.phaseAt(t) / phiRef - 1.0;
     }
 
     /** Relative difference a/b − 1; NaN when either is NaN or b is 0. */

@@ -99,6 +99,32 @@ public final class Track {
     }
 
     /**
+     * Position (m) at time s (s) by the parabola through the three samples nearest to s, into
+     * out; linear when the track has fewer than three. Where the path turns — at a mirror point
+     * the position along the field is quadratic in time — linear interpolation between samples
+     * a gyroperiod apart cuts the corner by a·h²/8 and misses the mirror-point field.
+     */
+    public double[] positionSmooth(double s, double[] out) {
+        if (n < 3) {
+            return positionAt(s, out);
+        }
+        int i = Arrays.binarySearch(t, 0, n, s);
+        int c = i >= 0 ? i : -i - 1;
+        if (i < 0 && c > 0 && (c == n || s - t[c - 1] < t[c] - s)) {
+            c--;
+        }
+        int lo = Math.max(0, Math.min(n - 3, c - 1));
+        double t0 = t[lo], t1 = t[lo + 1], t2 = t[lo + 2];
+        double l0 = (s - t1) * (s - t2) / ((t0 - t1) * (t0 - t2));
+        double l1 = (s - t0) * (s - t2) / ((t1 - t0) * (t1 - t2));
+        double l2 = (s - t0) * (s - t1) / ((t2 - t0) * (t2 - t1));
+        out[0] = l0 * x[lo] + l1 * x[lo + 1] + l2 * x[lo + 2];
+        out[1] = l0 * y[lo] + l1 * y[lo + 1] + l2 * y[lo + 2];
+        out[2] = l0 * z[lo] + l1 * z[lo + 1] + l2 * z[lo + 2];
+        return out;
+    }
+
+    /**
      * Times (s) where v∥ changes sign from negative to positive (one per bounce, always the same
      * bounce phase: the mirror point on the same side), linearly interpolated.
      */

@@ -24,6 +24,14 @@ final class Assembly {
     static final double DRIFT_FLOOR_RHO = 0.005;
 
     /**
+     * A track with this many times more samples per second than the other is fine enough to be
+     * read, by linear interpolation, at the other's sample times: the gyro-averaged full orbit
+     * has one point per gyration, the guiding-center reference 32 per initial gyroperiod (at
+     * least 8 per gyration where B ≤ 4 B0) and a fixed-step guiding center about one.
+     */
+    static final double FINER_SAMPLING = 4;
+
+    /**
      * Convergence errors closer than this factor to the reference's own error are limited by the
      * reference, not by the integrator, and give no order.
      */
@@ -67,7 +75,7 @@ final class Assembly {
                 m.get("mu_change")[k] = OrbitMetrics.muChange(g);
                 m.get("mu_jump")[k] = OrbitMetrics.muJump(g);
                 m.get("energy_error")[k] = r.energy().maxError();
-                m.get("phase_error")[k] = OrbitMetrics.relative(g.frequency(), ref.gyro().frequency());
+                m.get("phase_error")[k] = OrbitMetrics.phaseError(g, ref.gyro());
                 double[] w = OrbitMetrics.window(refTr);
                 m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
                 m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
@@ -185,14 +193,26 @@ final class Assembly {
     /**
      * Drift error over the reference's whole-period window w, cut to the time both tracks
      * cover (a pusher with a phase lag finishes its last whole gyration a little earlier); both
-     * tracks are averaged over the same span. NaN below {@link #DRIFT_FLOOR_RHO}.
+     * tracks are averaged over the same span. A track sampled {@link #FINER_SAMPLING} times more
+     * often than the other is read at the other's times, so that both have the same chords (the
+     * parallel part removed from a chord leaves a residue that grows with its length); tracks of
+     * similar sampling keep their own samples, since reading one at the other's times would put
+     * its points on its chords. NaN below {@link #DRIFT_FLOOR_RHO}.
      */
-    private static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
+    static double drift(Field f, Track tr, Track refTr, double[] w, double rho) {
         double ta = Math.max(w[0], Math.max(tr.firstTime(), refTr.firstTime()));
         double tb = Math.min(w[1], Math.min(tr.lastTime(), refTr.lastTime()));
         double floor = DRIFT_FLOOR_RHO * rho / (tb - ta);
-        return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb),
-                OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb), floor);
+        double rate = tr.size() / (tr.lastTime() - tr.firstTime());
+        double refRate = refTr.size() / (refTr.lastTime() - refTr.firstTime());
+        Track coarse = rate <= refRate ? tr : refTr;
+        if (Math.max(rate, refRate) < FINER_SAMPLING * Math.min(rate, refRate)) {
+            // similar sampling (a pusher's gyration centers against the reference's): own chords
+            return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb),
+                    OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb), floor);
+        }
+        return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb, coarse),
+                OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb, coarse), floor);
     }
 
     private static Map<String, double[]> newMetrics(int nph) {

@@ -80,8 +80,8 @@ public final class ValidationReport {
             ResultRow model = find(r, "gc-reference", "model");
             List<String> bad = new ArrayList<>();
             for (ResultRow row : r.rows()) {
-                if (!row.status().equals("ok")) {
-                    bad.add(row.integrator() + ": " + row.status());
+                if (!row.problem().isEmpty()) {
+                    bad.add(row.integrator() + ": " + row.problem());
                 }
             }
             t.add(List.of(r.resolved().spec().name(), r.resolved().species().name(), Format.number(r.resolved().eps()),
