@@ -31,8 +31,11 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
      * {@code out} and removes the partial results.
      *
      * @param resume       true to take up the points saved by an interrupted run of the same scan
-     * @param pointThreads points measured at the same time; 1 when the evaluator spreads each point
-     *                     over the cores itself (as {@link ModelErrorEvaluator} does)
+     * @param pointThreads points measured at the same time. {@link ModelErrorEvaluator} also spreads
+     *                     each point's orbits over the cores; running as many points at once as
+     *                     there are cores as well keeps every core busy through the long tail of a
+     *                     point (its tighter self-estimate run) at the price of a little
+     *                     time-slicing; the results do not depend on either count
      */
     public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
         ScanCheckpoint cp = ScanCheckpoint.open(out, settings, resume);

@@ -114,7 +114,7 @@ public final class SafeUseMap {
             ScanRequest.Built b = scans.get(i);
             ScanResult r;
             try {
-                r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, 1, overall);
+                r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, threads, overall);
             } catch (IllegalArgumentException e) {
                 // one scan that cannot run does not sink the map; it is listed with the reason
                 skipped.put(names.get(i), "scan failed: " + e.getMessage());

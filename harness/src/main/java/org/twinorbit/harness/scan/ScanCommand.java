@@ -123,10 +123,10 @@ public final class ScanCommand implements Runnable {
         long t0 = System.nanoTime();
         ScanResult r;
         if (execution.quiet()) {
-            r = setup.scan().run(setup.evaluator(), out, resume, 1, ScanProgress.NONE);
+            r = setup.scan().run(setup.evaluator(), out, resume, execution.threads(), ScanProgress.NONE);
         } else {
             try (ScanProgressBar bar = new ScanProgressBar("scan " + field)) {
-                r = setup.scan().run(setup.evaluator(), out, resume, 1, bar);
+                r = setup.scan().run(setup.evaluator(), out, resume, execution.threads(), bar);
             }
         }
         PrintWriter w = spec.commandLine().getOut();

@@ -8,15 +8,15 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** A real scan gives byte-identical JSON on one thread and on two. */
+/** A real scan gives byte-identical JSON on one thread and on two (two points at once, each on two threads). */
 class ScanThreadCountTest {
 
     @Test
     void sameJsonForAnyThreadCount(@TempDir Path dir) throws IOException {
-        String[] args = {"--field", "gradient", "--points", "2", "--phases", "3", "--eps-min", "0.01", "--eps-max", "0.1"};
+        String[] args = {"--field", "gradient", "--points", "3", "--phases", "3", "--eps-min", "0.01", "--eps-max", "0.1"};
         for (int threads : new int[] {1, 2}) {
             ScanRequest.Built b = ScanTestSupport.setup(concat(args, "--threads", Integer.toString(threads)));
-            b.scan().run(b.evaluator(), dir.resolve("t" + threads), false, 1, ScanProgress.NONE);
+            b.scan().run(b.evaluator(), dir.resolve("t" + threads), false, threads, ScanProgress.NONE);
         }
         assertEquals(Files.readString(dir.resolve("t1/scan.json")), Files.readString(dir.resolve("t2/scan.json")));
     }
