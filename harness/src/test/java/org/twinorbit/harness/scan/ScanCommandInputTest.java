@@ -48,6 +48,21 @@ class ScanCommandInputTest {
     }
 
     @Test
+    void twinorbitScanMapsBadInputToExitTwo(@TempDir Path dir) {
+        Path out = dir.resolve("never");
+        StringWriter err = new StringWriter();
+        CommandLine cl = org.twinorbit.harness.TwinorbitCommand.commandLine();
+        cl.setErr(new PrintWriter(err));
+        assertEquals(2, cl.execute("scan", "--field", "uniform", "--out", out.toString()));
+        assertTrue(err.toString().contains("has no length L"), err.toString());
+        assertFalse(Files.exists(out), "no output may be written for bad input");
+        StringWriter help = new StringWriter();
+        cl.setOut(new PrintWriter(help));
+        assertEquals(0, cl.execute("scan", "--help"));
+        assertTrue(help.toString().contains("--tolerance"), help.toString());
+    }
+
+    @Test
     void exitCodeTwoAndNothingWritten(@TempDir Path dir) throws java.io.IOException {
         Path out = dir.resolve("never");
         StringWriter err = new StringWriter();
