@@ -7,6 +7,9 @@ import java.util.concurrent.Callable;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.CaseRunner;
+import org.twinorbit.harness.scan.SafeUseMap;
+import org.twinorbit.harness.scan.ScanProgress;
+import org.twinorbit.harness.scan.ScanProgressBar;
 import org.twinorbit.harness.suite.ValidationReport;
 import org.twinorbit.harness.suite.ValidationSuite;
 import picocli.CommandLine.Command;
@@ -18,13 +21,18 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code twinorbit suite}: the built-in validation suite into tables and plots. */
 @Command(name = "suite", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Run the built-in validation suite (every field of the library with its cases, every integrator) "
-                + "and write validation.md, validation.csv, validation.json and PNG plots.",
+                + "and write validation.md, validation.csv, validation.json and PNG plots; the full suite also "
+                + "writes the safe-use map (eps* per field, metric and species: safe-use.md, .csv, .json, .png).",
         footer = {"", "The suite is short enough that the JIT's optimising compiler costs more CPU than it saves:",
             "java -XX:TieredStopAtLevel=1 -jar twinorbit.jar suite runs it about twice as fast, with identical results."})
 public final class SuiteCommand implements Callable<Integer> {
 
-    @Option(names = "--quick", description = "The reduced suite for CI: one case per field, 4 gyrophases.")
+    @Option(names = "--quick", description = "The reduced suite for CI: one case per field, 4 gyrophases, "
+            + "no safe-use map.")
     boolean quick;
+
+    @Option(names = "--no-safe-use", description = "Skip the safe-use map (about 50 s of the full suite's time).")
+    boolean noSafeUse;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "results",
             description = "Directory of the report (default: ${DEFAULT-VALUE}).")
@@ -51,6 +59,25 @@ public final class SuiteCommand implements Callable<Integer> {
         pw.printf(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads; wrote %s, validation.csv, validation.json and plots/%n",
                 cases.size(), seconds, threads, out.resolve("validation.md"));
         pw.flush();
+        if (!quick && !noSafeUse) {
+            writeSafeUseMap(pw, threads);
+        }
         return 0;
+    }
+
+    /** The breakdown threshold eps* of every field, metric and species at the default tolerances. */
+    private void writeSafeUseMap(PrintWriter pw, int threads) {
+        long t0 = System.nanoTime();
+        SafeUseMap.Result r;
+        if (execution.quiet()) {
+            r = SafeUseMap.run(out, SafeUseMap.Resolution.FULL, false, threads, ScanProgress.NONE);
+        } else {
+            try (ScanProgressBar bar = new ScanProgressBar("safe-use map")) {
+                r = SafeUseMap.run(out, SafeUseMap.Resolution.FULL, false, threads, bar);
+            }
+        }
+        pw.printf(java.util.Locale.ROOT, "safe-use map: %d rows in %.1f s; wrote %s, safe-use.csv, safe-use.json, safe-use.png%n",
+                r.rows().size(), (System.nanoTime() - t0) * 1e-9, out.resolve("safe-use.md"));
+        pw.flush();
     }
 }
