@@ -7,6 +7,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.UUID;
 
 /**
  * Writes result files atomically: the bytes go to a temporary file in the same directory, which
@@ -17,16 +18,19 @@ public final class AtomicFiles {
 
     private AtomicFiles() {}
 
+    /** Writes {@code text} as UTF-8 to {@code target}, creating parent directories. */
     public static void write(Path target, String text) {
         write(target, text.getBytes(StandardCharsets.UTF_8));
     }
 
+    /** Writes {@code bytes} to {@code target}, creating parent directories. */
     public static void write(Path target, byte[] bytes) {
         Path dir = target.toAbsolutePath().getParent();
         Path tmp = null;
         try {
             Files.createDirectories(dir);
-            tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
+            // a plain name, not createTempFile, so that the file gets the usual permissions (not 0600)
+            tmp = dir.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".tmp");
             Files.write(tmp, bytes);
             try {
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

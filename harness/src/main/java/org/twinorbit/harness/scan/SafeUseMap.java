@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.harness.report.AtomicFiles;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -134,9 +135,9 @@ public final class SafeUseMap {
 
     /** Writes safe-use.md, .csv, .json and .png into {@code out}, each atomically. */
     public static void write(Result r, Path out) {
-        AtomicFiles.writeString(out.resolve("safe-use.md"), markdown(r));
-        AtomicFiles.writeString(out.resolve("safe-use.csv"), csv(r));
-        AtomicFiles.writeString(out.resolve("safe-use.json"), json(r));
+        AtomicFiles.write(out.resolve("safe-use.md"), markdown(r));
+        AtomicFiles.write(out.resolve("safe-use.csv"), csv(r));
+        AtomicFiles.write(out.resolve("safe-use.json"), json(r));
         plot(r, out.resolve("safe-use.png"));
     }
 

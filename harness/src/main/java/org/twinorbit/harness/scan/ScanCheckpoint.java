@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.harness.report.AtomicFiles;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -94,7 +95,7 @@ public final class ScanCheckpoint {
             points.add(ScanJson.pointMap(q));
         }
         root.put("points", points);
-        AtomicFiles.writeString(file, ScanJson.write(root));
+        AtomicFiles.write(file, ScanJson.write(root));
     }
 
     /** Removes the file once the final results are safely written. */

@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.harness.report.AtomicFiles;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
