@@ -13,7 +13,7 @@ class FailedRunsTest {
 
     @Test
     void guidingCenterModelFailureIsReportedAndFullOrbitsContinue() {
-        // In the force-free shear field ∇×b = b/Ls, so B*∥ = B0 + p∥/(q Ls) (Littlejohn, J. Plasma Phys. 29, 1983, with
+        // In the force-free shear field ∇×b = b/Ls, so B*∥ = B0 + p∥/(q Ls) (Littlejohn, J. Plasma Phys. 29 (1983), with
         // b·∇×b = 1/Ls for this field): a proton moving against b with ρ∥ = |p∥|/(qB0) > Ls starts
         // with B*∥ < 0, where the guiding-center model does not exist.
         Species p = Species.PROTON;

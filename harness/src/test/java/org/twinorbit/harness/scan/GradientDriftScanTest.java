@@ -18,8 +18,8 @@ import org.twinorbit.shared.Vec3;
 
 /**
  * The drift error of the guiding-center model in {@code gradient}, B = B0 (1 + x/L) ẑ, against
- * the exact finite-ε drift of the full orbit computed by quadrature (Brizard, Phys. Plasmas 24,
- * 2017, "On the validity of the guiding-center approximation in the presence of strong magnetic
+ * the exact finite-ε drift of the full orbit computed by quadrature (Brizard, Phys. Plasmas 24
+ * (2017), "On the validity of the guiding-center approximation in the presence of strong magnetic
  * gradients"): for a particle with u_z = 0 the energy (|u|) and p_y = m u_y + q A_y(x),
  * A_y = B0 (x + x²/(2L)), are exact invariants, so the x motion is one-dimensional between the
  * turning points where |u_y(x)| = |u|, and over one period

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The irreversible μ jump in a magnetic mirror is exponentially small in 1/ε (Chirikov, Phys.
- * Rep. 52, 1979): ln(mu_jump) must be close to linear in 1/ε over the small-ε end of the scan,
+ * Rep. 52 (1979)): ln(mu_jump) must be close to linear in 1/ε over the small-ε end of the scan,
  * above the floor set by the references' own accuracy.
  */
 class MirrorChirikovScanTest {
