@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
+/** The log-spaced ε grid; expected values are derived by algebra, no physics value is involved. */
 class EpsilonGridTest {
 
     @Test

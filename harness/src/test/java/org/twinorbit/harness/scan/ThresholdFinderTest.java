@@ -6,6 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
+/**
+ * The ε* finder on synthetic error curves whose crossings are derived here in closed form
+ * (power laws, and the exp(−b/ε) shape of μ jumps, Chirikov, Phys. Rep. 52 (1979)); no physics
+ * value is involved.
+ */
 class ThresholdFinderTest {
 
     private static double[] apply(double[] eps, java.util.function.DoubleUnaryOperator f) {
