@@ -23,6 +23,15 @@ public interface Field {
     /** The characteristic length L (m) that defines ε = ρ0/L; +∞ for a field without one. */
     double length();
 
+    /**
+     * The field strength (T) in which ρ0 is taken for ε = ρ0/L, given |B| (T) at the initial
+     * guiding center: that |B| itself unless the field's L is defined with a fixed strength
+     * (a current sheet takes ρ0 in its normal field Bn, wherever the particle starts).
+     */
+    default double epsilonFieldStrength(double bAtStart) {
+        return bAtStart;
+    }
+
     /** Text saying what L is for this field (e.g. "Lm, the mirror half-length"). */
     String lengthMeaning();
 

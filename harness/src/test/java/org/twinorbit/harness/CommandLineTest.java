@@ -87,6 +87,15 @@ class CommandLineTest {
                 o.err());
     }
 
+    /** ε = ρ0/L ≥ 1 from an energy is refused like --eps ≥ 1 (DESIGN.md bad-input rules). */
+    @Test
+    void energyGivingEpsAboveOneIsRefused() {
+        // a 1 GeV proton in the 0.5 T, 1 m mirror has rho0 = 11.3 m, eps = 11
+        Outcome o = badRun("--field", "mirror", "--energy", "1e9");
+        assertTrue(o.err().contains("energy: 1.000e+09 eV gives eps = rho0/L = 11.31"), o.err());
+        assertTrue(o.err().contains("must be < 1"), o.err());
+    }
+
     @Test
     void tooFewStepsAndBadDurationUnitAreRefused() {
         Outcome o = badRun("--steps-per-gyro", "3");

@@ -15,8 +15,8 @@ import org.twinorbit.shared.Vec3;
  *
  * <p>The kinetic energy and pitch angle are those of the gyration in the E×B frame (with no E
  * they are the laboratory ones); the pitch angle is measured from b at the guiding center.
- * ε = ρ0/L with ρ0 = p/(|q|B), p the total momentum, B = |B| at the guiding center and L the
- * field's {@link Field#length()}.
+ * ε = ρ0/L with ρ0 = p/(|q|B), p the total momentum, B = |B| at the guiding center (or the
+ * field's {@link Field#epsilonFieldStrength}) and L the field's {@link Field#length()}.
  */
 public final class InitialCondition {
 
@@ -73,7 +73,7 @@ public final class InitialCondition {
         }
         checkPitch(pitchDeg);
         double b = fieldStrength(field, position);
-        double p = epsilon * length * Math.abs(species.charge()) * b;
+        double p = epsilon * length * Math.abs(species.charge()) * field.epsilonFieldStrength(b);
         double ev = Relativity.kineticFromU(species, p / species.mass());
         return new InitialCondition(field, species, ev, pitchDeg, position, b);
     }
@@ -126,9 +126,9 @@ public final class InitialCondition {
         return momentum() / (Math.abs(species.charge()) * bMag);
     }
 
-    /** ε = ρ0/L; 0 for a field with infinite L. */
+    /** ε = p/(|q| B_ε L), B_ε = {@link Field#epsilonFieldStrength}; 0 for a field with infinite L. */
     public double epsilon() {
-        return gyroradius() / field.length();
+        return momentum() / (Math.abs(species.charge()) * field.epsilonFieldStrength(bMag) * field.length());
     }
 
     /** Initial gyroperiod T_c = 2πγm/(|q|B) (s). */

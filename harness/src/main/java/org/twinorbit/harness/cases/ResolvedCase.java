@@ -4,7 +4,7 @@ import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.integrators.InitialCondition;
-import org.twinorbit.shared.Relativity;
+import org.twinorbit.harness.Format;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
@@ -12,7 +12,8 @@ import org.twinorbit.shared.Vec3;
  * A case checked against its field: the field built, the starting point inside the domain,
  * the energy and ε = ρ0/L fixed, and the scales every metric is measured in (DESIGN.md "What is
  * measured"): ρ0 = p/(|q|B) with p the total momentum and B at the initial guiding center,
- * T_c = 2πγm/(|q|B).
+ * T_c = 2πγm/(|q|B); ε = ρ0/L with ρ0 taken in the field's {@link Field#epsilonFieldStrength}
+ * (the normal field Bn of a current sheet, wherever the particle starts).
  */
 public final class ResolvedCase {
 
@@ -61,8 +62,7 @@ public final class ResolvedCase {
                 throw new IllegalArgumentException("eps: field '" + c.field()
                         + "' has no length L (it is infinite); give --energy instead");
             }
-            double p = c.eps() * length * Math.abs(s.charge()) * b0;
-            this.energyEv = Relativity.kineticFromU(s, p / s.mass());
+            this.energyEv = InitialCondition.ofEpsilon(field, s, c.eps(), c.pitchDeg(), start).kineticEv();
         } else {
             this.energyEv = c.energyEv();
         }
@@ -70,7 +70,13 @@ public final class ResolvedCase {
         this.gamma = initial.gamma();
         this.momentum = initial.momentum();
         this.rho0 = initial.gyroradius();
-        this.eps = Double.isFinite(length) ? rho0 / length : 0.0;
+        this.eps = Double.isFinite(length) ? initial.epsilon() : 0.0;
+        if (!(eps < 1)) {
+            // the guiding-center model needs rho0 << L; --eps is held to the same bound
+            throw new IllegalArgumentException("energy: " + Format.number(energyEv) + " eV gives eps = rho0/L = "
+                    + Format.number(eps) + " in field '" + c.field() + "' (L = " + Format.number(length)
+                    + " m); eps must be < 1: give a smaller energy");
+        }
         this.gyroPeriod = initial.gyroperiod();
     }
 
@@ -91,7 +97,7 @@ public final class ResolvedCase {
     public double momentum() { return momentum; }
     /** ρ0 = p/(|q|B) (m). */
     public double rho0() { return rho0; }
-    /** ε = ρ0/L; 0 for a field without a length. */
+    /** ε = ρ0/L, ρ0 taken in {@link Field#epsilonFieldStrength}; 0 for a field without a length. */
     public double eps() { return eps; }
     /** The field's L (m); +∞ when it has none. */
     public double length() { return field.length(); }
