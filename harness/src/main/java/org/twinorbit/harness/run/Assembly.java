@@ -139,6 +139,7 @@ final class Assembly {
             OrbitClass[] cls = new OrbitClass[nph];
             OrbitClass[] refCls = new OrbitClass[nph];
             OrbitStatus[] st = new OrbitStatus[nph];
+            String[] labels = new String[nph];
             double[] ends = new double[nph];
             GuidingCenterRecord r = p.gcRef;
             for (int k = 0; k < nph; k++) {
@@ -155,10 +156,15 @@ final class Assembly {
                 ends[k] = r.outcome().endTime();
                 cls[k] = OrbitMetrics.classify(st[k], tr);
                 refCls[k] = OrbitMetrics.classify(ref.outcome().status(), refTr);
+                labels[k] = modelStatus(st[k], ref.outcome().status());
+                if (ref.outcome().status() != OrbitStatus.OK && labels[k].endsWith("full-orbit")) {
+                    ends[k] = ref.outcome().endTime();
+                }
             }
-            rows.add(row("gc-reference", "guiding-center", "model", st, ends, m, new LinkedHashMap<>(), cls, refCls,
-                    Double.NaN, new double[0], new double[0], r.outcome().steps(), r.outcome().fieldEvaluations(),
-                    r.outcome().wallNanos()));
+            ResultRow model = row("gc-reference", "guiding-center", "model", st, ends, m, new LinkedHashMap<>(), cls,
+                    refCls, Double.NaN, new double[0], new double[0], r.outcome().steps(),
+                    r.outcome().fieldEvaluations(), r.outcome().wallNanos());
+            rows.add(withModelStatus(model, labels, ends));
         }
 
         List<ReferenceSummary> refs = List.of(
@@ -265,6 +271,49 @@ final class Assembly {
         String classes = String.join("/", seen.stream().map(OrbitClass::label).toList());
         return new ResultRow(name, model, kind, worst.label(), when, metrics, invariants, classes,
                 (double) agree / cls.length, order, dts, errs, steps < 0 ? Double.NaN : steps, evals, wallNanos * 1e-9);
+    }
+
+    /** Model-row statuses from the least to the most severe. */
+    private static final List<String> MODEL_STATUSES = List.of("ok", "lost", "lost-guiding-center",
+            "lost-full-orbit", "model-failure", "unstable-full-orbit", "unstable");
+
+    /**
+     * The model row's status in one phase, from both models: plain {@code lost} only when both
+     * lost the particle (a loss cone), {@code lost-full-orbit} / {@code lost-guiding-center} when
+     * one model kept what the other lost, and the failure of either model.
+     */
+    static String modelStatus(OrbitStatus guidingCenter, OrbitStatus fullOrbit) {
+        if (guidingCenter == OrbitStatus.UNSTABLE || guidingCenter == OrbitStatus.MODEL_FAILURE) {
+            return guidingCenter.label();
+        }
+        if (fullOrbit == OrbitStatus.UNSTABLE || fullOrbit == OrbitStatus.MODEL_FAILURE) {
+            return "unstable-full-orbit";
+        }
+        boolean gcLost = guidingCenter == OrbitStatus.LOST;
+        boolean foLost = fullOrbit == OrbitStatus.LOST;
+        if (gcLost && foLost) {
+            return "lost";
+        }
+        return foLost ? "lost-full-orbit" : gcLost ? "lost-guiding-center" : "ok";
+    }
+
+    /** The row with the most severe of the per-phase model statuses and its earliest time (s). */
+    private static ResultRow withModelStatus(ResultRow r, String[] labels, double[] ends) {
+        String worst = "ok";
+        for (String l : labels) {
+            if (MODEL_STATUSES.indexOf(l) > MODEL_STATUSES.indexOf(worst)) {
+                worst = l;
+            }
+        }
+        double when = Double.NaN;
+        for (int k = 0; k < labels.length; k++) {
+            if (!worst.equals("ok") && labels[k].equals(worst) && !(ends[k] >= when)) {
+                when = ends[k];
+            }
+        }
+        return new ResultRow(r.integrator(), r.model(), r.errorKind(), worst, when, r.metrics(), r.invariants(),
+                r.orbitClass(), r.classAgreement(), r.order(), r.convergenceDt(), r.convergenceError(), r.steps(),
+                r.fieldEvaluations(), r.wallSeconds());
     }
 
     private static int severity(OrbitStatus s) {

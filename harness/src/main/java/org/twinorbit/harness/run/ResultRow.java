@@ -10,7 +10,9 @@ import java.util.Map;
  * @param integrator       the integrator's name (for the model row: {@code gc-reference})
  * @param model            {@code full-orbit} or {@code guiding-center}
  * @param errorKind        {@code discretisation} or {@code model}
- * @param status           the most severe status over the ensemble
+ * @param status           the most severe status over the ensemble; the model row combines both
+ *                         models phase by phase ({@code lost-full-orbit}, {@code lost-guiding-center},
+ *                         {@code unstable-full-orbit}; plain {@code lost} only when both lost it)
  * @param statusTime       earliest time (s) a phase stopped with that status; NaN when ok
  * @param metrics          metric name -> mean and worst over the ensemble, in report order
  * @param invariants       exact invariant name -> its drift (full-orbit rows)
@@ -42,7 +44,8 @@ public record ResultRow(String integrator, String model, String errorKind, Strin
      */
     public String problem() {
         if (!status.equals("ok") && !status.equals("lost")) {
-            return status;
+            return classAgreement < 1.0 ? status + ", class " + orbitClass + " in "
+                    + Math.round(100 * classAgreement) + "% of phases the reference's" : status;
         }
         if (classAgreement < 1.0) {
             return "class " + orbitClass + " differs from the reference's in "

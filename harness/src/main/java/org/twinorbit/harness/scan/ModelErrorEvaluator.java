@@ -136,7 +136,7 @@ public final class ModelErrorEvaluator implements PointEvaluator {
 
     private Map<String, Double> values(CaseResult r) {
         ResultRow model = r.rows().stream().filter(x -> x.errorKind().equals("model")).findFirst().orElseThrow();
-        boolean failed = model.status().equals("model-failure") || model.status().equals("unstable");
+        boolean failed = model.status().equals("model-failure") || model.status().startsWith("unstable");
         Map<String, Double> out = new LinkedHashMap<>();
         out.put("point_failed", 0.0);
         for (ScanMetric m : ScanMetric.values()) {
