@@ -19,7 +19,7 @@ import java.util.Map;
  *     the gyrophase ensemble ({@code mu_jump}, {@code mu_change}, {@code drift_error},
  *     {@code position_error_rho}, {@code bounce_period_error}, {@code class_change}), then
  *     {@code kappa} (current sheets), {@code point_failed} (1 when the particles could not be
- *     placed), {@code full_orbit_reference_error_rho} and
+ *     placed), {@code lost} (1 when both models lost the particle, as in a loss cone), {@code full_orbit_reference_error_rho} and
  *     {@code guiding_center_reference_error_rho} (each reference against itself at a 100×
  *     tighter tolerance), {@code full_orbit_evaluations} and {@code guiding_center_evaluations}
  *     (per orbit), and with {@code --integrators} {@code <integrator>_<metric>_worst} for
@@ -27,7 +27,7 @@ import java.util.Map;
  * <li>{@code thresholds}: one per metric, tolerance and pitch angle with {@code metric},
  *     {@code tolerance}, {@code pitch_deg}, {@code eps_star}, {@code energy_ev_star},
  *     {@code outcome} ({@code crossed}, {@code not-reached}, {@code exceeded-at-start},
- *     {@code no-data}), plus {@code kappa_star} for current sheets.
+ *     {@code no-data}, {@code lost}: every point of that pitch lost by both models), plus {@code kappa_star} for current sheets.
  * </ul>
  * A value that was not measured is {@code null}; an orbit that failed makes a worst case
  * {@code "inf"}. Numbers are written in their shortest exact form, so they read back unchanged.

@@ -63,7 +63,9 @@ public final class ScanTables {
                 .append("shifts the bounce period and, over several bounces, the position along the field line, which ")
                 .append("is why bounce_period_error and position_error_rho can grow like eps (or stay near a few rho0) ")
                 .append("while their signed ensemble mean is far smaller. `inf` marks a point where the guiding ")
-                .append("center failed or the particles could not be placed (`point_failed` = 1). ")
+                .append("center failed or the particles could not be placed (`point_failed` = 1); `lost` = 1 marks a point where ")
+                .append("both models lost the particle (a loss cone): it gives no threshold, and a pitch lost at every ")
+                .append("point has the outcome `lost`. ")
                 .append("`*_reference_error_rho` is each reference's self-estimated error (a run at 100 times tighter ")
                 .append("tolerance), `*_evaluations` its field evaluations per orbit.\n\n");
         sb.append("## Thresholds\n\n");

@@ -9,7 +9,12 @@ public enum ThresholdOutcome {
     /** The error already exceeds the tolerance at the smallest ε scanned; no ε* in range. */
     EXCEEDED_AT_START("exceeded-at-start"),
     /** The metric was not measured at any point (it does not apply to these orbits). */
-    NO_DATA("no-data");
+    NO_DATA("no-data"),
+    /**
+     * Both models lose the particle at every point (a pitch inside a loss cone): the orbit has
+     * no breakdown threshold, it escapes.
+     */
+    LOST("lost");
 
     private final String label;
 

@@ -25,8 +25,15 @@ public final class Thresholds {
                     List<ScanPoint> curve = points.stream().filter(p -> p.pitchDeg() == pitch)
                             .sorted((a, b) -> Double.compare(a.eps(), b.eps())).toList();
                     double[] eps = curve.stream().mapToDouble(ScanPoint::eps).toArray();
-                    double[] worst = curve.stream().mapToDouble(p -> p.worst(m)).toArray();
-                    ThresholdFinder.Crossing c = ThresholdFinder.find(eps, worst, tol);
+                    // a point lost by both models (a loss cone) measures no breakdown: only the
+                    // class comparison applies there
+                    boolean classes = m == ScanMetric.CLASS_CHANGE;
+                    double[] worst = curve.stream().mapToDouble(p -> classes || !lost(p) ? p.worst(m) : Double.NaN)
+                            .toArray();
+                    boolean allLost = !curve.isEmpty() && curve.stream().allMatch(Thresholds::lost);
+                    ThresholdFinder.Crossing c = allLost && !classes
+                            ? new ThresholdFinder.Crossing(ThresholdOutcome.LOST, Double.NaN)
+                            : ThresholdFinder.find(eps, worst, tol);
                     double energy = c.outcome() == ThresholdOutcome.CROSSED && axis.variesEnergy()
                             ? axis.energyEv().applyAsDouble(c.epsStar()) : Double.NaN;
                     out.add(new Threshold(m, tol, pitch, c.outcome(), c.epsStar(), energy));
@@ -34,5 +41,10 @@ public final class Thresholds {
             }
         }
         return out;
+    }
+
+    /** True when both models lost the particle of this point (its {@code lost} value is 1). */
+    static boolean lost(ScanPoint p) {
+        return p.value("lost") == 1.0;
     }
 }
