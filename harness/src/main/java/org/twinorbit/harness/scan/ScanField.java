@@ -57,10 +57,10 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
      * The default initial guiding center: the field's own, except
      * <ul>
      * <li>in the mirror, where the scan starts off the axis at r = 0.2 Lm in the midplane. On the
-     *     axis a gyration ring is centred on the symmetry axis, its canonical angular momentum
-     *     p_φ = m r u_φ + q r A_φ is fixed by μ alone, so μ cannot jump (Noether; common
-     *     practice), and every gyrophase is the same orbit turned about the axis, which leaves the
-     *     ensemble nothing to sample;
+     *     axis the gyration ring is centred on the symmetry axis, so every gyrophase is the same
+     *     orbit turned about the axis (p_φ is conserved, Noether; common practice) and the ensemble
+     *     samples nothing. μ still jumps there (4.4e-4 at ε = 0.124 on the axis, as measured by
+     *     this tool): p_φ fixes the orbit's shape about the axis, not the adiabatic invariant;
      * <li>in the ramp, where the scan starts at r = 3 ρ0 so that the inward E×B drift of the
      *     compression, v_E = r/(2(τ + t)), is not zero; at r = 3 ρ0 it is 1.5 ε v⊥ at the start,
      *     below the particle's speed over most of the range.
