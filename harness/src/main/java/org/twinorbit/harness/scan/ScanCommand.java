@@ -85,8 +85,8 @@ public final class ScanCommand implements Runnable {
 
     @Option(names = "--tolerance", paramLabel = "METRIC=TOL[,TOL...]",
             description = "Tolerance(s) of a metric at which eps* is found, repeatable; metrics: mu_jump (1%%), "
-                    + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0). "
-                    + "Metrics not named keep their default.")
+                    + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0), "
+                    + "mu_change (none by default). Metrics not named keep their default.")
     Map<String, String> tolerances = new LinkedHashMap<>();
 
     @Option(names = "--reference-rtol", paramLabel = "RTOL",

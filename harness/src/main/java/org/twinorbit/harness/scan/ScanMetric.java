@@ -12,7 +12,7 @@ import java.util.stream.Collectors;
 public enum ScanMetric {
     /** Irreversible change of the gyro-averaged μ, relative; the μ breakdown is found on this one. */
     MU_JUMP("mu_jump", "irreversible change of gyro-averaged mu (relative)", 0.01),
-    /** Largest change of the gyro-averaged μ, reversible ripple included; reported, not thresholded. */
+    /** Largest change of the gyro-averaged μ, reversible ripple included; thresholded only when asked. */
     MU_CHANGE("mu_change", "largest change of gyro-averaged mu, ripple included (relative)", Double.NaN),
     /** Mean perpendicular drift of the guiding center against the full orbit's, relative. */
     DRIFT_ERROR("drift_error", "perpendicular drift velocity error (relative)", 0.05),
@@ -45,7 +45,7 @@ public enum ScanMetric {
         return description;
     }
 
-    /** The default tolerance; NaN for a metric reported beside another and not thresholded. */
+    /** The default tolerance; NaN for a metric thresholded only when a tolerance is given. */
     public double defaultTolerance() {
         return defaultTolerance;
     }
