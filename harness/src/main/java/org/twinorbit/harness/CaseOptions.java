@@ -18,7 +18,7 @@ public final class CaseOptions {
 
     @Option(names = "--case", paramLabel = "FILE", description = "Read the case from a YAML file (keys: "
             + "name, field, field-parameters, species, start, energy, eps, pitch, phases, duration, duration-unit, "
-            + "pushers, steps-per-gyro, gc-integrators, gc-step, reference-rtol); options override it.")
+            + "pushers, steps-per-gyro, gc-integrators, gc-step, gc-start, reference-rtol); options override it.")
     Path caseFile;
 
     @Option(names = "--name", paramLabel = "TEXT", description = "Label of the case in reports.")
@@ -72,6 +72,11 @@ public final class CaseOptions {
     @Option(names = "--gc-step", paramLabel = "TC", description = "Guiding-center step in gyroperiods (default 1).")
     Double gcStep;
 
+    @Option(names = "--gc-start", paramLabel = "START", description = "Start of the model row's guiding centers: "
+            + "matched (default: one per gyrophase, from the reference orbit's first gyration average) or shared "
+            + "(one zeroth-order guiding center for the whole ring).")
+    String gcStart;
+
     @Option(names = "--reference-rtol", paramLabel = "RTOL",
             description = "Relative tolerance of both references, in [1e-12, 1e-6] (default 1e-10).")
     Double referenceRtol;
@@ -94,6 +99,7 @@ public final class CaseOptions {
         s.stepsPerGyro = stepsPerGyro;
         s.gcIntegrators = gcIntegrators;
         s.gcStep = gcStep;
+        s.gcStart = gcStart;
         s.referenceRtol = referenceRtol;
         return s;
     }

@@ -25,11 +25,13 @@ import org.twinorbit.shared.Vec3;
  * @param gcIntegrators    guiding-center integrator names, in report order
  * @param gcStepGyro       guiding-center step, in initial gyroperiods
  * @param referenceRtol    relative tolerance of both references (their error is estimated at 1/100 of it)
+ * @param gcStart          where the model row's guiding centers start (per phase, or one shared)
  */
 public record Case(String name, String field, Map<String, Double> fieldParameters, Species species,
                    Vec3 start, Double energyEv, Double eps, double pitchDeg, int phases,
                    double duration, DurationUnit durationUnit, List<String> pushers, int stepsPerGyro,
-                   List<String> gcIntegrators, double gcStepGyro, double referenceRtol) {
+                   List<String> gcIntegrators, double gcStepGyro, double referenceRtol,
+                   GuidingCenterStart gcStart) {
 
     public Case {
         fieldParameters = java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(fieldParameters));
@@ -40,6 +42,12 @@ public record Case(String name, String field, Map<String, Double> fieldParameter
     /** Copy with another gyrophase ensemble size. */
     public Case withPhases(int n) {
         return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, n,
-                duration, durationUnit, pushers, stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol);
+                duration, durationUnit, pushers, stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol, gcStart);
+    }
+
+    /** Copy with another start of the model row's guiding centers. */
+    public Case withGcStart(GuidingCenterStart g) {
+        return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, phases,
+                duration, durationUnit, pushers, stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol, g);
     }
 }

@@ -43,12 +43,13 @@ public final class CaseSpec {
     @JsonProperty("steps-per-gyro") public Integer stepsPerGyro;
     @JsonProperty("gc-integrators") public List<String> gcIntegrators;
     @JsonProperty("gc-step") public Double gcStep;
+    @JsonProperty("gc-start") public String gcStart;
     @JsonProperty("reference-rtol") public Double referenceRtol;
 
     /** The keys a case file may use, in the order they are listed to users. */
     public static final List<String> KEYS = List.of("name", "field", "field-parameters", "species",
             "start", "energy", "eps", "pitch", "phases", "duration", "duration-unit", "pushers",
-            "steps-per-gyro", "gc-integrators", "gc-step", "reference-rtol");
+            "steps-per-gyro", "gc-integrators", "gc-step", "gc-start", "reference-rtol");
 
     /** A new spec: this one with every entry that {@code o} sets replaced. */
     public CaseSpec overriddenBy(CaseSpec o) {
@@ -79,6 +80,7 @@ public final class CaseSpec {
         r.stepsPerGyro = o.stepsPerGyro != null ? o.stepsPerGyro : stepsPerGyro;
         r.gcIntegrators = o.gcIntegrators != null ? o.gcIntegrators : gcIntegrators;
         r.gcStep = o.gcStep != null ? o.gcStep : gcStep;
+        r.gcStart = o.gcStart != null ? o.gcStart : gcStart;
         r.referenceRtol = o.referenceRtol != null ? o.referenceRtol : referenceRtol;
         return r;
     }
@@ -146,7 +148,8 @@ public final class CaseSpec {
         List<String> gs = pick(gcIntegrators, allGc, "gc-integrators");
         String label = name != null ? name : f + "-" + s.name();
         return new Case(label, f, fieldParameters == null ? Map.of() : fieldParameters, s, x0, e, eps, p, n,
-                d, unit, ps, spg, gs, gcs, rtol);
+                d, unit, ps, spg, gs, gcs, rtol,
+                gcStart == null ? GuidingCenterStart.MATCHED : GuidingCenterStart.parse(gcStart, "gc-start"));
     }
 
     private static List<String> pick(List<String> chosen, List<String> all, String option) {

@@ -24,6 +24,7 @@ import org.twinorbit.harness.run.Stat;
  * case:       name, field, field_parameters {name: value}, species, mass_kg, charge_c, start_m [x,y,z]
  *             (initial guiding center), energy_ev, pitch_deg, phases, duration, duration_unit,
  *             pushers [..], steps_per_gyro, gc_integrators [..], gc_step_gyro, reference_rtol,
+ *             gc_start (matched: each phase against its own guiding center; shared: one for all),
  *             eps (ρ0/L), rho_m (ρ0 = p/(|q|B)), L_m (null when infinite), b0_t (|B| at the start),
  *             gyro_period_s (T_c), end_time_s, bounce_period_s (measured first when the duration is
  *             in bounces, else null), full_orbit_dt_s, gc_dt_s
@@ -91,6 +92,7 @@ public final class ResultJson {
         m.put("gc_integrators", c.gcIntegrators());
         m.put("gc_step_gyro", c.gcStepGyro());
         m.put("reference_rtol", c.referenceRtol());
+        m.put("gc_start", c.gcStart().label());
         m.put("eps", num(rc.eps()));
         m.put("rho_m", num(rc.rho0()));
         m.put("L_m", num(rc.length()));

@@ -80,6 +80,11 @@ public final class ResultTables {
                 + Format.number(r.bouncePeriod()) + " s)");
         l.add(String.format(Locale.ROOT, "duration %s; %d gyrophases; full orbit %d steps/Tc; guiding center step %s Tc",
                 dur, c.phases(), c.stepsPerGyro(), Format.number(r.gcStep() / rc.gyroPeriod())));
+        l.add(c.gcStart() == org.twinorbit.harness.cases.GuidingCenterStart.MATCHED
+                ? "model row: each gyrophase against its own guiding center, started from the reference orbit's first "
+                        + "gyration average (gc-start matched)"
+                : "model row: every gyrophase against one shared zeroth-order guiding center, offsets O(eps) per phase "
+                        + "(gc-start shared)");
         for (ReferenceSummary s : r.references()) {
             l.add(String.format(Locale.ROOT, "%s reference: %s, rtol %s, self-estimated error %s rho0, status %s",
                     s.model(), s.method(), Format.number(s.rtol()), Format.number(s.selfErrorRho()), s.status()));

@@ -141,8 +141,9 @@ final class Assembly {
             OrbitStatus[] st = new OrbitStatus[nph];
             String[] labels = new String[nph];
             double[] ends = new double[nph];
-            GuidingCenterRecord r = p.gcRef;
             for (int k = 0; k < nph; k++) {
+                // each phase's own guiding center where the start is matched, else the shared one
+                GuidingCenterRecord r = p.gcMatched[k] != null ? p.gcMatched[k] : p.gcRef;
                 FullOrbitRecord ref = p.foRef[k];
                 Track tr = r.recorder().track();
                 Track refTr = ref.gyro().centers();
@@ -161,6 +162,7 @@ final class Assembly {
                     ends[k] = ref.outcome().endTime();
                 }
             }
+            GuidingCenterRecord r = p.gcRef;
             ResultRow model = row("gc-reference", "guiding-center", "model", st, ends, m, new LinkedHashMap<>(), cls,
                     refCls, Double.NaN, new double[0], new double[0], r.outcome().steps(),
                     r.outcome().fieldEvaluations(), r.outcome().wallNanos());

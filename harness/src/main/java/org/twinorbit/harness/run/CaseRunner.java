@@ -5,6 +5,9 @@ import java.util.List;
 import org.twinorbit.harness.BadInputException;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.DurationUnit;
+import org.twinorbit.harness.cases.GuidingCenterStart;
+import org.twinorbit.harness.metrics.GyroAverager;
+import org.twinorbit.harness.metrics.Track;
 import org.twinorbit.harness.cases.ResolvedCase;
 import org.twinorbit.integrators.FullOrbitPusher;
 import org.twinorbit.integrators.GuidingCenterIntegrator;
@@ -153,6 +156,8 @@ public final class CaseRunner {
         GuidingCenterRecord[] gc;
         GuidingCenterRecord[][] gcConv;
         GuidingCenterRecord gcRef;
+        /** The model row's guiding center of each phase ({@link GuidingCenterStart#MATCHED}); null: shared. */
+        GuidingCenterRecord[] gcMatched;
         GuidingCenterRecord gcTight;
 
         Plan(ResolvedCase rc) {
@@ -223,6 +228,8 @@ public final class CaseRunner {
             fo = new FullOrbitRecord[np][nph];
             foConv = new FullOrbitRecord[np][3];
             foRef = new FullOrbitRecord[nph];
+            gcMatched = new GuidingCenterRecord[nph];
+            boolean matched = c.gcStart() == GuidingCenterStart.MATCHED;
             gc = new GuidingCenterRecord[ng];
             gcConv = new GuidingCenterRecord[ng][2];
             int stride = (int) Math.max(1, n / PLOT_POINTS);
@@ -234,8 +241,13 @@ public final class CaseRunner {
             double refCost = samples * FO_REFERENCE_SAMPLE;
             for (int k = 0; k < nph; k++) {
                 int kk = k;
-                jobs.add(new Parallel.Job(refCost, () -> foRef[kk] = References.fullOrbit(rc.field(), rc.species(),
-                        x0[kk], u0[kk], tEnd, samples, c.referenceRtol(), refStride, deadband)));
+                jobs.add(new Parallel.Job(refCost + (matched ? samples * GC_REFERENCE_SAMPLE : 0), () -> {
+                    foRef[kk] = References.fullOrbit(rc.field(), rc.species(), x0[kk], u0[kk], tEnd, samples,
+                            c.referenceRtol(), refStride, deadband);
+                    if (matched) {
+                        gcMatched[kk] = matchedGuidingCenter(foRef[kk].gyro(), refStride);
+                    }
+                }));
                 for (int i = 0; i < np; i++) {
                     int ii = i;
                     jobs.add(new Parallel.Job(n, () -> fo[ii][kk] = Orbits.push(pushers.get(ii), rc.field(),
@@ -275,6 +287,29 @@ public final class CaseRunner {
                 }
             }
             addGuidingCenterConvergence(jobs, ng);
+        }
+
+        /**
+         * The guiding center of one phase's own orbit: started at the mid-time of the reference's
+         * first whole gyration from that gyration's mean X, v∥ and μ (see {@link GuidingCenterStart}),
+         * with p∥ = γ m ⟨v∥⟩ at the case's γ (exact in static fields without E, where γ is
+         * constant). Null when the orbit completed no gyration (lost at once): the shared start is
+         * used for that phase.
+         */
+        private GuidingCenterRecord matchedGuidingCenter(GyroAverager g, int stride) {
+            if (g.gyrations() < 1) {
+                return null;
+            }
+            Track centers = g.centers();
+            double t0 = centers.time(0);
+            double[] x = {centers.coord(0, 0), centers.coord(0, 1), centers.coord(0, 2)};
+            if (!(t0 < tEnd) || !rc.field().inDomain(x[0], x[1], x[2])) {
+                return null;
+            }
+            double pPar = rc.gamma() * rc.species().mass() * centers.vParallel(0);
+            long m = Math.max(1, (long) Math.ceil(samples * (tEnd - t0) / tEnd));
+            return References.guidingCenter(rc.field(), rc.species(), t0, g.mu(0), x, pPar, tEnd, m,
+                    c.referenceRtol(), stride, deadband, 0);
         }
 
         private void addGuidingCenterConvergence(List<Parallel.Job> jobs, int ng) {

@@ -56,14 +56,24 @@ public final class References {
     public static GuidingCenterRecord guidingCenter(Field field, Species s, double mu, double[] gc0, double pPar0,
                                                     double tEnd, long n, double rtol, int stride, double deadband,
                                                     int mirrorPoints) {
-        long t0 = System.nanoTime();
+        return guidingCenter(field, s, 0.0, mu, gc0, pPar0, tEnd, n, rtol, stride, deadband, mirrorPoints);
+    }
+
+    /**
+     * The same from time t0 (s) to tEnd (s), sampled at n + 1 evenly spaced times: a guiding
+     * center started from a gyration average, at that gyration's mid-time.
+     */
+    public static GuidingCenterRecord guidingCenter(Field field, Species s, double t0, double mu, double[] gc0,
+                                                    double pPar0, double tEnd, long n, double rtol, int stride,
+                                                    double deadband, int mirrorPoints) {
+        long clock = System.nanoTime();
         GuidingCenterRecorder rec = new GuidingCenterRecorder(field, s, mu, stride, deadband);
         GuidingCenterReference ref = new GuidingCenterReference(field, s, mu).relativeTolerance(rtol);
         if (mirrorPoints > 0) {
             ref.stopAfterMirrorPoints(mirrorPoints);
         }
-        GuidingCenterResult r = ref.run(0.0, gc0.clone(), pPar0, tEnd, tEnd / n, rec);
-        Outcome o = new Outcome(r.status(), r.endTime(), -1, r.fieldEvaluations(), System.nanoTime() - t0);
+        GuidingCenterResult r = ref.run(t0, gc0.clone(), pPar0, tEnd, (tEnd - t0) / n, rec);
+        Outcome o = new Outcome(r.status(), r.endTime(), -1, r.fieldEvaluations(), System.nanoTime() - clock);
         return new GuidingCenterRecord(o, rec, r.position().toArray(), r.endTime(), r.mirrorPoints());
     }
 }

@@ -8,6 +8,7 @@ import org.twinorbit.harness.BadInputException;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.harness.cases.DurationUnit;
+import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.metrics.Track;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.CaseRunner;
@@ -56,6 +57,7 @@ public final class ModelErrorEvaluator implements PointEvaluator {
     private final List<String> pushers;
     private final List<String> gcIntegrators;
     private final int threads;
+    private final GuidingCenterStart gcStart;
     /** Wall time (ns) spent in the full-orbit and guiding-center references, summed over threads. */
     private final java.util.concurrent.atomic.LongAdder fullOrbitNanos = new java.util.concurrent.atomic.LongAdder();
     private final java.util.concurrent.atomic.LongAdder guidingCenterNanos = new java.util.concurrent.atomic.LongAdder();
@@ -68,10 +70,13 @@ public final class ModelErrorEvaluator implements PointEvaluator {
      * @param pushers       full-orbit pushers to run beside the references (may be empty)
      * @param gcIntegrators guiding-center integrators to run beside the references (may be empty)
      * @param threads       worker threads of each point's runs
+     * @param gcStart       where the model's guiding centers start
      */
     public ModelErrorEvaluator(String field, Map<String, Double> parameters, Species species, Vec3 start,
                                int phases, ScanDuration duration, ScanField recipe, double rtol,
-                               List<String> pushers, List<String> gcIntegrators, int threads) {
+                               List<String> pushers, List<String> gcIntegrators, int threads,
+                               GuidingCenterStart gcStart) {
+        this.gcStart = gcStart;
         this.field = field;
         this.parameters = new LinkedHashMap<>(parameters);
         this.species = species;
@@ -89,7 +94,7 @@ public final class ModelErrorEvaluator implements PointEvaluator {
     Case caseAt(double eps, double energyEv, double pitchDeg, double value, DurationUnit unit) {
         return new Case("scan", field, recipe.parametersAt(parameters, eps), species, start, energyEv, null,
                 pitchDeg, phases, value, unit, pushers, CaseSpec.DEFAULT_STEPS_PER_GYRO, gcIntegrators,
-                CaseSpec.DEFAULT_GC_STEP, rtol);
+                CaseSpec.DEFAULT_GC_STEP, rtol, gcStart);
     }
 
     /**

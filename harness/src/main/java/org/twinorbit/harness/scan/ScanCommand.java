@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.CaseSpec;
+import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.shared.Species;
 import org.twinorbit.harness.ExecutionOptions;
 import picocli.CommandLine.Command;
@@ -88,6 +89,11 @@ public final class ScanCommand implements Runnable {
                     + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0), "
                     + "mu_change (none by default). Metrics not named keep their default.")
     Map<String, String> tolerances = new LinkedHashMap<>();
+
+    @Option(names = "--gc-start", paramLabel = "START", description = "Start of the model's guiding centers: "
+            + "matched (one per gyrophase, from the reference orbit's first gyration average) or shared (one "
+            + "zeroth-order guiding center for the whole ring) (default: ${DEFAULT-VALUE}).")
+    String gcStart = "matched";
 
     @Option(names = "--reference-rtol", paramLabel = "RTOL",
             description = "Relative tolerance of both references (default: ${DEFAULT-VALUE}).")
@@ -196,6 +202,7 @@ public final class ScanCommand implements Runnable {
         q.durationUnit = durationUnit == null ? null : ScanDuration.Unit.parse(durationUnit);
         q.tolerances = tolerances();
         q.referenceRtol = referenceRtol;
+        q.gcStart = GuidingCenterStart.parse(gcStart, "--gc-start");
         q.integrators = integrators;
         q.threads = execution.threads();
         return q.build();

@@ -7,6 +7,7 @@ import java.util.Map;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.harness.cases.CaseSpec;
+import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.run.Registry;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
@@ -33,6 +34,8 @@ public final class ScanRequest {
     /** Tolerances by metric; metrics not named keep their default. */
     public Map<ScanMetric, List<Double>> tolerances = new LinkedHashMap<>();
     public double referenceRtol = CaseSpec.DEFAULT_RTOL;
+    /** Where the model's guiding centers start: one per gyrophase (default) or one shared. */
+    public GuidingCenterStart gcStart = GuidingCenterStart.MATCHED;
     /** Pushers and guiding-center integrators to scan at their step beside the references. */
     public List<String> integrators = List.of();
     /** Worker threads of each point (the points themselves run one after the other). */
@@ -119,8 +122,9 @@ public final class ScanRequest {
         settings.put("duration_unit", d.unit().label());
         settings.put("reference_rtol", referenceRtol);
         settings.put("integrators", new ArrayList<>(integrators));
+        settings.put("gc_start", gcStart.label());
         ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
-                referenceRtol, pushers, gcs, threads);
+                referenceRtol, pushers, gcs, threads, gcStart);
         return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances()), ev);
     }
 

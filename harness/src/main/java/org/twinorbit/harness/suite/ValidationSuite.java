@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.DurationUnit;
+import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.run.Registry;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
@@ -82,7 +83,7 @@ public final class ValidationSuite {
     private static Case offAxis(Case c) {
         return new Case(c.name(), c.field(), c.fieldParameters(), c.species(), new Vec3(0.1, 0, 0), c.energyEv(),
                 c.eps(), c.pitchDeg(), c.phases(), c.duration(), c.durationUnit(), c.pushers(), c.stepsPerGyro(),
-                c.gcIntegrators(), c.gcStepGyro(), c.referenceRtol());
+                c.gcIntegrators(), c.gcStepGyro(), c.referenceRtol(), c.gcStart());
     }
 
     private static Case energy(String name, String field, Species s, double ev, double pitch, double gyro) {
@@ -100,6 +101,6 @@ public final class ValidationSuite {
     private static Case make(String name, String field, Species s, Double ev, Double eps, double pitch,
                              double duration, DurationUnit unit) {
         return new Case(name, field, Map.of(), s, null, ev, eps, pitch, PHASES, duration, unit,
-                Registry.pusherNames(), 32, Registry.guidingCenterNames(), 1.0, 1e-10);
+                Registry.pusherNames(), 32, Registry.guidingCenterNames(), 1.0, 1e-10, GuidingCenterStart.MATCHED);
     }
 }

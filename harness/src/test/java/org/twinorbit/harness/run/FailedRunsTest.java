@@ -24,6 +24,8 @@ class FailedRunsTest {
         s.energy = ev;
         s.pitch = 180.0;
         s.phases = 2;
+        // the shared guiding center starts at t = 0, where B*par is already negative
+        s.gcStart = "shared";
         s.duration = 5.0;
         CaseResult r = TestCases.run(s);
         ResultRow model = TestCases.row(r, "gc-reference");

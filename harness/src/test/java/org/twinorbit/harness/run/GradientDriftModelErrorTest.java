@@ -34,6 +34,8 @@ class GradientDriftModelErrorTest {
         s.eps = eps;
         s.pitch = 90.0;
         s.phases = 4;
+        // the exact drift of each phase is compared with the one guiding center the ring shares
+        s.gcStart = "shared";
         s.duration = 20.0;
         CaseResult r = TestCases.run(s);
         ResultRow model = TestCases.row(r, "gc-reference");

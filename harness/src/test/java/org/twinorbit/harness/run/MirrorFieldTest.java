@@ -19,6 +19,8 @@ class MirrorFieldTest {
         s.eps = 0.01;
         s.pitch = 60.0;
         s.phases = 1;
+        // the guiding center of the stated pitch at the midplane, not one re-derived from the orbit
+        s.gcStart = "shared";
         s.duration = 2.0;
         s.durationUnit = "bounces";
         CaseResult r = TestCases.run(s);

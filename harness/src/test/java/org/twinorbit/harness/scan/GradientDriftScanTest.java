@@ -35,8 +35,9 @@ class GradientDriftScanTest {
 
     @Test
     void driftErrorMatchesExactFiniteEpsDrift() {
+        // the shared start: every phase's exact drift against the one guiding center of the ring
         ScanRequest.Built setup = ScanTestSupport.setup("--field", "gradient", "--phases", "4",
-                "--pitch", "90");
+                "--pitch", "90", "--gc-start", "shared");
         Field f = Fields.create("gradient", P);
         EnergyScale scale = new EnergyScale(f, P, Vec3.ZERO);
         double b0 = 1.0;
