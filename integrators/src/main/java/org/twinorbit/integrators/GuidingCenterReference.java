@@ -56,7 +56,10 @@ public final class GuidingCenterReference {
                 + " guiding-center equations, with mirror-point and domain events";
     }
 
-    /** Relative tolerance of every component, in (0, 1e-3]; absolute tolerances follow from it. */
+    /**
+     * The tolerance rtol, in (0, 1e-3]: the position is held to rtol·ρ0 (m) absolute, p∥ to
+     * rtol·p (kg m/s) absolute plus rtol relative, with ρ0 and p from the initial state.
+     */
     public GuidingCenterReference relativeTolerance(double rtol) {
         if (!(rtol > 0 && rtol <= 1e-3)) {
             throw new IllegalArgumentException("relative tolerance must be in (0, 1e-3], got " + rtol);
@@ -103,7 +106,7 @@ public final class GuidingCenterReference {
         }
         double span = tEnd - t0;
         double[] atol = absoluteTolerances(t0, y);
-        double[] rtolV = {rtol, rtol, rtol, rtol};
+        double[] rtolV = relativeTolerances();
         DormandPrince853Integrator dp = new DormandPrince853Integrator(1e-14 * span, span, atol, rtolV);
 
         OrbitStatus[] status = {OrbitStatus.OK};
@@ -202,19 +205,29 @@ public final class GuidingCenterReference {
         return result(status[0], tStop, end, evalsAtStart, mirrors);
     }
 
-    /** Absolute tolerances: rtol times the gyroradius scale (or |X0|) and the total momentum. */
+    /**
+     * Absolute tolerances: rtol·ρ0 (m) on the position, ρ0 = p/(|q|B) at the start, and rtol·p
+     * (kg m/s) on p∥. The position has no relative part (see {@link #relativeTolerances}): the
+     * distance from the origin is no scale of the orbit, and an orbit at |X| ≫ ρ0 (a torus at
+     * R0, a dipole at L planet radii) would otherwise lose its drift in the error of the much
+     * faster parallel motion. Without motion or without B, ρ0 falls back to the field's length,
+     * or 1 m.
+     */
     private double[] absoluteTolerances(double t0, double[] y) {
         FieldSample s = new FieldSample();
         field.evaluate(t0, y[0], y[1], y[2], s);
         double m = eq.species().mass();
         double p = Math.sqrt(y[3] * y[3] + 2.0 * m * eq.mu() * s.bMag());
         double rho = p / (Math.abs(eq.species().charge()) * s.bMag());
-        double length = Math.max(Math.sqrt(y[0] * y[0] + y[1] * y[1] + y[2] * y[2]), rho);
-        if (!(length > 0)) {
-            length = 1.0;
-        }
+        double length = rho > 0 && Double.isFinite(rho) ? rho
+                : field.length() > 0 && Double.isFinite(field.length()) ? field.length() : 1.0;
         double pScale = p > 0 ? p : eq.species().mass() * 1.0;
         return new double[] {rtol * length, rtol * length, rtol * length, rtol * pScale};
+    }
+
+    /** Relative tolerances: none on the position (absolute only), rtol on p∥. */
+    private double[] relativeTolerances() {
+        return new double[] {0.0, 0.0, 0.0, rtol};
     }
 
     private GuidingCenterResult result(OrbitStatus status, double t, double[] y, long evalsAtStart,

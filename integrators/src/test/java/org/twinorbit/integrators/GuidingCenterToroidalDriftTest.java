@@ -42,6 +42,41 @@ class GuidingCenterToroidalDriftTest {
         }
     }
 
+    /**
+     * The harness's default reference tolerance (CaseSpec.DEFAULT_RTOL in the harness module,
+     * which this module cannot see) and the reference's own default.
+     */
+    private static final double[] DEFAULT_RTOLS = {1e-10, GuidingCenterReference.DEFAULT_RELATIVE_TOLERANCE};
+
+    @Test
+    void driftIsExactAtTheDefaultToleranceFarFromTheOrigin() {
+        // the orbit sits at |X| = R0 = 100 ρ0 from the origin: the position tolerance must follow
+        // the orbit's own scale, not |X|, or the drift (~ε v) is lost in the error of the
+        // parallel motion (~v) along a circle of radius R0
+        StringBuilder failures = new StringBuilder();
+        for (double rtol : DEFAULT_RTOLS) {
+            for (double pitch : new double[] {30, 60}) {
+                for (Species s : new Species[] {Species.PROTON, Species.ELECTRON}) {
+                    InitialCondition ic = InitialCondition.ofEpsilon(FIELD, s, 0.01, pitch, new Vec3(R0, 0, 0));
+                    double tEnd = 200 * ic.gyroperiod();
+                    GuidingCenterResult r = new GuidingCenterReference(FIELD, s, ic.mu()).relativeTolerance(rtol)
+                            .run(0, ic.position().toArray(), ic.parallelMomentum(), tEnd, 0, null);
+                    assertEquals(OrbitStatus.OK, r.status());
+                    double vz = r.position().z() / tEnd;
+                    double err = Math.abs(vz / formula(ic) - 1);
+                    System.out.printf("toroidal GC drift at rtol %.0e, pitch %.0f deg, %s: relative error %.2e%n",
+                            rtol, pitch, s.name(), err);
+                    // curvature + grad-B drift (Northrop 1963), exact for the GC equations here
+                    // (B*∥ = B, p∥ and R constant): only integration error remains, held to 1e-10
+                    if (!(err < 1e-10)) {
+                        failures.append(String.format(" %.2e at rtol %.0e, pitch %.0f deg, %s;", err, rtol, pitch, s.name()));
+                    }
+                }
+            }
+        }
+        assertTrue(failures.length() == 0, "relative drift errors above 1e-10:" + failures);
+    }
+
     @Test
     void exactOrbitDriftsAtTheSameSpeedToOrderEpsilon() {
         // model check: the exact Lorentz orbit (Commons Math DP853, rtol 1e-11) of an 8-phase
