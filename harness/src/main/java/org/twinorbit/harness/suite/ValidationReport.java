@@ -114,7 +114,11 @@ public final class ValidationReport {
         sb.append("## Overview\n\n");
         sb.append("Discretisation columns (boris, rk4, gc-rk4) compare an integrator with the reference of its own ")
                 .append("model; model columns compare the guiding-center reference with the gyro-averaged ")
-                .append("full-orbit reference.\n\n");
+                .append("full-orbit reference. Each gyrophase is compared with a guiding center of its own, started ")
+                .append("from the gyration average of its reference orbit's first gyration (gc-start matched); the ")
+                .append("cases named `-shared` compare the same orbits with the one zeroth-order guiding center the ring ")
+                .append("shares, whose O(eps) start-up offset per phase shows in the drift, position and bounce ")
+                .append("columns.\n\n");
         sb.append(overview(results).markdown()).append('\n');
         Set<String> fields = new LinkedHashSet<>();
         for (CaseResult r : results) {

@@ -56,12 +56,18 @@ public final class ValidationSuite {
         l.add(eps("gradient-electron-eps0.01", "gradient", e, 0.01, 45, 20));
         l.add(eps("toroidal-proton-eps0.01", "toroidal", p, 0.01, 60, 20));
         l.add(eps("toroidal-proton-eps0.05", "toroidal", p, 0.05, 30, 20));
+        // the same orbits against one shared zeroth-order guiding center: the start-up offset
+        // the matched start removes, side by side in the report
+        l.add(shared(eps("toroidal-proton-eps0.01", "toroidal", p, 0.01, 60, 20)));
+        l.add(shared(eps("toroidal-proton-eps0.05", "toroidal", p, 0.05, 30, 20)));
         l.add(offAxis(bounces("mirror-proton-eps0.01", "mirror", p, 0.01, 60, 2)));
         l.add(offAxis(bounces("mirror-proton-eps0.05", "mirror", p, 0.05, 75, 2)));
         l.add(offAxis(eps("mirror-electron-eps0.01-losscone", "mirror", e, 0.01, 20, 100)));
         l.add(bounces("dipole-proton-eps0.01", "dipole", p, 0.01, 45, 2));
         l.add(bounces("dipole-electron-eps0.02", "dipole", e, 0.02, 70, 2));
         l.add(bounces("dipole-proton-eps0.05", "dipole", p, 0.05, 30, 2));
+        l.add(shared(bounces("dipole-proton-eps0.01", "dipole", p, 0.01, 45, 2)));
+        l.add(shared(bounces("dipole-proton-eps0.05", "dipole", p, 0.05, 30, 2)));
         l.add(eps("tokamak-proton-eps0.02-passing", "tokamak", p, 0.02, 20, 150));
         l.add(bounces("tokamak-proton-eps0.02-trapped", "tokamak", p, 0.02, 80, 2));
         l.add(eps("tokamak-electron-eps0.01-passing", "tokamak", e, 0.01, 40, 150));
@@ -84,6 +90,13 @@ public final class ValidationSuite {
         return new Case(c.name(), c.field(), c.fieldParameters(), c.species(), new Vec3(0.1, 0, 0), c.energyEv(),
                 c.eps(), c.pitchDeg(), c.phases(), c.duration(), c.durationUnit(), c.pushers(), c.stepsPerGyro(),
                 c.gcIntegrators(), c.gcStepGyro(), c.referenceRtol(), c.gcStart());
+    }
+
+    /** The case with the shared zeroth-order guiding-center start, "-shared" in its name. */
+    private static Case shared(Case c) {
+        return new Case(c.name() + "-shared", c.field(), c.fieldParameters(), c.species(), c.start(), c.energyEv(),
+                c.eps(), c.pitchDeg(), c.phases(), c.duration(), c.durationUnit(), c.pushers(), c.stepsPerGyro(),
+                c.gcIntegrators(), c.gcStepGyro(), c.referenceRtol(), GuidingCenterStart.SHARED);
     }
 
     private static Case energy(String name, String field, Species s, double ev, double pitch, double gyro) {
