@@ -145,8 +145,11 @@ public final class ModelErrorEvaluator implements PointEvaluator {
         boolean failed = model.status().equals("model-failure") || model.status().startsWith("unstable");
         Map<String, Double> out = new LinkedHashMap<>();
         out.put("point_failed", 0.0);
-        // both models lost the particle in some phase: escaped through a loss cone, not a breakdown
-        out.put("lost", model.status().equals("lost") ? 1.0 : 0.0);
+        // both models lost the particle in every phase: escaped through a loss cone, not a
+        // breakdown; a point where only some phases escape keeps its errors
+        boolean allLost = model.status().equals("lost") && model.orbitClass().equals("lost")
+                && model.classAgreement() == 1.0;
+        out.put("lost", allLost ? 1.0 : 0.0);
         for (ScanMetric m : ScanMetric.values()) {
             Stat s = switch (m) {
                 case CLASS_CHANGE -> new Stat(1 - model.classAgreement(), model.classAgreement() < 1 ? 1 : 0);

@@ -19,7 +19,7 @@ import java.util.Map;
  *     the gyrophase ensemble ({@code mu_jump}, {@code mu_change}, {@code drift_error},
  *     {@code position_error_rho}, {@code bounce_period_error}, {@code class_change}), then
  *     {@code kappa} (current sheets), {@code point_failed} (1 when the particles could not be
- *     placed), {@code lost} (1 when both models lost the particle, as in a loss cone), {@code full_orbit_reference_error_rho} and
+ *     placed), {@code lost} (1 when both models lost the particle in every phase, as in a loss cone), {@code full_orbit_reference_error_rho} and
  *     {@code guiding_center_reference_error_rho} (each reference against itself at a 100×
  *     tighter tolerance), {@code full_orbit_evaluations} and {@code guiding_center_evaluations}
  *     (per orbit), and with {@code --integrators} {@code <integrator>_<metric>_worst} for
