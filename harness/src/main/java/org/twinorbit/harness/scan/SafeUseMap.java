@@ -147,7 +147,9 @@ public final class SafeUseMap {
                 .append("gyro-averaged full-orbit reference, worst case over the gyrophase ensemble) exceeds the ")
                 .append("default tolerance; below it, and below the energy beside it, guiding centers are safe for ")
                 .append("that metric. `not-reached`: safe over the whole range scanned; `exceeded-at-start`: not safe ")
-                .append("even at the smallest eps scanned; `no-data`: the metric does not apply (no bounce, no drift). ")
+                .append("even at the smallest eps scanned; `no-data`: the metric does not apply (no bounce, no drift); ")
+                .append("`lost-above`: within tolerance wherever the particle stays, and lost by both models (a wall, ")
+                .append("the edge of the field) from the eps given on. ")
                 .append("Tolerances: mu_jump 1 %, drift_error 5 %, position_error_rho 1 rho0, ")
                 .append("bounce_period_error 1 %, class_change 0 (any orbit trapped in one model and lost in the other).\n\n")
                 .append("In a static magnetic field the shape of an orbit depends on p/(qB) alone, relativistic or ")
@@ -158,7 +160,7 @@ public final class SafeUseMap {
         sb.append("|---|---|---|---|---|---|---|---|---|\n");
         for (Row row : r.rows()) {
             Threshold t = row.threshold();
-            boolean crossed = t.outcome() == ThresholdOutcome.CROSSED;
+            boolean crossed = t.outcome().hasEpsStar();
             sb.append("| ").append(row.field()).append(" | ").append(row.species()).append(" | ")
                     .append(t.metric().key()).append(" | ").append(row.epsMeaning()).append(" | ")
                     .append(Format.number(row.pitchDeg())).append(" | ").append(Format.number(row.epsMin()))

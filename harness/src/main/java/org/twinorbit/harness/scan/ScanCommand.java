@@ -233,8 +233,8 @@ public final class ScanCommand implements Runnable {
 
     private static void printSummary(PrintWriter w, ScanResult r) {
         for (Threshold t : r.thresholds()) {
-            String at = t.outcome() == ThresholdOutcome.CROSSED
-                    ? "eps* = " + Format.number(t.epsStar())
+            String at = t.outcome().hasEpsStar()
+                    ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())
                     + (Double.isNaN(t.energyEvStar()) ? "" : ", " + Format.number(t.energyEvStar()) + " eV")
                     : t.outcome().label();
             w.printf("%-20s tol %-8s pitch %-5s %s%n", t.metric().key(), Format.number(t.tolerance()),

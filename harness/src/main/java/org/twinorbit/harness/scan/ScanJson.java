@@ -27,7 +27,8 @@ import java.util.Map;
  * <li>{@code thresholds}: one per metric, tolerance and pitch angle with {@code metric},
  *     {@code tolerance}, {@code pitch_deg}, {@code eps_star}, {@code energy_ev_star},
  *     {@code outcome} ({@code crossed}, {@code not-reached}, {@code exceeded-at-start},
- *     {@code no-data}, {@code lost}: every point of that pitch lost by both models), plus {@code kappa_star} for current sheets.
+ *     {@code no-data}, {@code lost}: every point of that pitch lost by both models, {@code lost-above}: within
+ *     tolerance wherever the particle stays, lost by both models from eps_star on), plus {@code kappa_star} for current sheets.
  * </ul>
  * A value that was not measured is {@code null}; an orbit that failed makes a worst case
  * {@code "inf"}. Numbers are written in their shortest exact form, so they read back unchanged.
@@ -97,7 +98,7 @@ public final class ScanJson {
         m.put("eps_star", number(t.epsStar()));
         m.put("energy_ev_star", number(t.energyEvStar()));
         if (axis.derivedName() != null) {
-            m.put(axis.derivedName() + "_star", t.outcome() == ThresholdOutcome.CROSSED
+            m.put(axis.derivedName() + "_star", t.outcome().hasEpsStar()
                     ? number(axis.derived().applyAsDouble(t.epsStar())) : null);
         }
         m.put("outcome", t.outcome().label());

@@ -74,7 +74,7 @@ public final class ScanTables {
                 .append(derived == null ? "" : " " + derived + "* |").append('\n');
         sb.append("|---|---|---|---|---|---|").append(derived == null ? "" : "---|").append('\n');
         for (Threshold t : r.thresholds()) {
-            boolean crossed = t.outcome() == ThresholdOutcome.CROSSED;
+            boolean crossed = t.outcome().hasEpsStar();
             sb.append("| ").append(t.metric().key()).append(" | ").append(Format.number(t.tolerance()))
                     .append(" | ").append(Format.number(t.pitchDeg())).append(" | ").append(t.outcome().label())
                     .append(" | ").append(crossed ? Format.number(t.epsStar()) : "—")

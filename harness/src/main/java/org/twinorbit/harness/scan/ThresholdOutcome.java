@@ -14,12 +14,22 @@ public enum ThresholdOutcome {
      * Both models lose the particle at every point (a pitch inside a loss cone): the orbit has
      * no breakdown threshold, it escapes.
      */
-    LOST("lost");
+    LOST("lost"),
+    /**
+     * Within tolerance at every point where the particle stays, and lost by both models from
+     * ε* on (it reaches a wall or leaves the field): safe up to ε*, where it is no longer confined.
+     */
+    LOST_ABOVE("lost-above");
 
     private final String label;
 
     ThresholdOutcome(String label) {
         this.label = label;
+    }
+
+    /** True when the outcome comes with an ε* (the crossing, or where the losses begin). */
+    public boolean hasEpsStar() {
+        return this == CROSSED || this == LOST_ABOVE;
     }
 
     /** The word used in tables and JSON. */

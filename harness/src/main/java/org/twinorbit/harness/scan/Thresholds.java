@@ -34,7 +34,14 @@ public final class Thresholds {
                     ThresholdFinder.Crossing c = allLost && !classes
                             ? new ThresholdFinder.Crossing(ThresholdOutcome.LOST, Double.NaN)
                             : ThresholdFinder.find(eps, worst, tol);
-                    double energy = c.outcome() == ThresholdOutcome.CROSSED && axis.variesEnergy()
+                    double firstLost = curve.stream().filter(Thresholds::lost).mapToDouble(ScanPoint::eps)
+                            .min().orElse(Double.NaN);
+                    if (!classes && c.outcome() == ThresholdOutcome.NOT_REACHED && !Double.isNaN(firstLost)) {
+                        // "safe over the whole range" would hide that the particle escapes above firstLost
+                        c = new ThresholdFinder.Crossing(ThresholdOutcome.LOST_ABOVE, firstLost);
+                    }
+                    boolean hasEps = c.outcome() == ThresholdOutcome.CROSSED || c.outcome() == ThresholdOutcome.LOST_ABOVE;
+                    double energy = hasEps && axis.variesEnergy()
                             ? axis.energyEv().applyAsDouble(c.epsStar()) : Double.NaN;
                     out.add(new Threshold(m, tol, pitch, c.outcome(), c.epsStar(), energy));
                 }
