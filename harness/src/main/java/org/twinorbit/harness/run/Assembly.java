@@ -195,7 +195,8 @@ final class Assembly {
                     r.recorder().energySeries().values()));
         }
         return new CaseResult(p.rc, p.tEnd, p.bounce, p.n, p.gcDt, rows, refs, mu, energy,
-                p.foRef[0].gyro().centers(), p.gcRef.recorder().track());
+                p.foRef[0].gyro().centers(),
+                (p.gcMatched[0] != null ? p.gcMatched[0] : p.gcRef).recorder().track());
     }
 
     /**

@@ -18,7 +18,7 @@ import org.twinorbit.harness.metrics.Track;
  * @param muCurves        ⟨μ⟩/⟨μ⟩_0 − 1 against time per full-orbit integrator, phase 0
  * @param energyCurves    (W − W0)/K0 against time per integrator, phase 0
  * @param fullOrbitCenters gyro-averaged full-orbit reference, phase 0
- * @param gcTrack         guiding-center reference, phase 0
+ * @param gcTrack         the guiding-center reference compared with phase 0 (its own with the matched start)
  */
 public record CaseResult(ResolvedCase resolved, double endTime, double bouncePeriod, long fullOrbitSteps,
                          double gcStep, List<ResultRow> rows, List<ReferenceSummary> references,

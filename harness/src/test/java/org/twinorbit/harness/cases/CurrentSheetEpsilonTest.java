@@ -10,7 +10,7 @@ import org.twinorbit.shared.Species;
 
 /**
  * In a current sheet ε = ρ/R_c and κ = sqrt(R_c/ρ) take ρ in the normal field Bn (Büchner &
- * Zelenyi, J. Geophys. Res. 94, 1989), so the energy of a given ε does not depend on where the
+ * Zelenyi, J. Geophys. Res. 94 (1989)), so the energy of a given ε does not depend on where the
  * particle starts. Off the sheet |B| is far larger than Bn: at z = 3δ, |B| ≈ 10 Bn with the
  * default B0 = 10 Bn.
  */
@@ -32,7 +32,7 @@ class CurrentSheetEpsilonTest {
     @Test
     void epsilonIsTakenInBnWhereverTheParticleStarts() {
         double rc = DELTA * BN / B0;
-        // p = ε R_c |q| Bn: the definition of ε with ρ in Bn (Büchner & Zelenyi 1989)
+        // p = ε R_c |q| Bn: the definition of ε with ρ in Bn (Büchner & Zelenyi (1989))
         double p = 0.1 * rc * Species.PROTON.charge() * BN;
         double expectedEv = Relativity.kineticFromU(Species.PROTON, p / Species.PROTON.mass());
         for (double z : new double[] {0.0, 3 * DELTA}) {

@@ -11,7 +11,7 @@ import org.twinorbit.integrators.OrbitStatus;
 /**
  * The model row compares two models, so its status must say what happened to both. In the
  * gradient field B = B0(1 + x/Lg) the exact orbit keeps |u| and p_y = m u_y + q B0 (x + x²/(2Lg)),
- * so a 90° particle swings in x between the roots of u_y = ±|u| (Brizard, Phys. Plasmas 24, 2017);
+ * so a 90° particle swings in x between the roots of u_y = ±|u| (Brizard, Phys. Plasmas 24 (2017));
  * at ε = 0.5 the inner swing of some gyrophases passes x = −Lg, where B vanishes and the domain
  * ends, while the guiding center drifts along y at x = 0 and stays inside.
  */
