@@ -21,12 +21,20 @@ public final class Track {
      * @param deadband |v∥| (m/s) below which v∥ counts as neither sign, so that round-off noise
      *                 around v∥ = 0 (a pitch of exactly 90° in a uniform field) makes no mirror points
      */
+    /** Samples closer in time than this fraction of the time are one sample: the later is kept. */
+    static final double SAME_TIME = 1e-12;
+
     public Track(double deadband) {
         this.deadband = deadband;
     }
 
     /** Appends a sample. @param time (s) @param px @param py @param pz position (m) @param vParallel v∥ (m/s) */
     public void add(double time, double px, double py, double pz, double vParallel) {
+        if (n > 0 && Math.abs(time - t[n - 1]) <= SAME_TIME * Math.abs(time)) {
+            // an event that splits an integrator step can emit its time twice (~1e-20 s apart,
+            // slightly different states); two nodes that close make any fit through them blow up
+            n--;
+        }
         if (n == t.length) {
             int m = 2 * n;
             t = Arrays.copyOf(t, m);
