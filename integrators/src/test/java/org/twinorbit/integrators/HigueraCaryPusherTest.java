@@ -6,7 +6,7 @@ class HigueraCaryPusherTest extends AbstractLeapfrogPusherTest {
     @Override FullOrbitPusher pusher() { return new HigueraCaryPusher(); }
 
     /**
-     * Higuera & Cary (Phys. Plasmas 24, 052104, 2017) rotate at γ² = (σ + sqrt(σ² + 4(τ² + u*²)))/2
+     * Higuera & Cary (Phys. Plasmas 24, 052104 (2017)) rotate at γ² = (σ + sqrt(σ² + 4(τ² + u*²)))/2
      * with σ = γ² − τ², u* = u·τ/c: slightly above γ(u) when u has a part across B.
      */
     @Override
