@@ -1,5 +1,7 @@
 package org.twinorbit.harness;
 
+import org.twinorbit.integrators.fullorbit.FullOrbitPusher;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -8,8 +10,6 @@ import java.util.Map;
 import org.twinorbit.harness.report.ResultJson;
 import org.twinorbit.harness.run.References;
 import org.twinorbit.harness.run.Registry;
-import org.twinorbit.integrators.FullOrbitPusher;
-import org.twinorbit.integrators.GuidingCenterIntegrator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;

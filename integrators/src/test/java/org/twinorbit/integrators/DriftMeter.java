@@ -1,5 +1,6 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.fullorbit.FullOrbitStepper;
 import org.twinorbit.fields.Field;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Species;
@@ -10,12 +11,12 @@ import org.twinorbit.shared.Species;
  * the synchronised states (u and du/dt for the time, x and v for the position), so that a
  * window of whole periods is used (DESIGN.md: a partial window biases the mean).
  */
-final class DriftMeter {
+public final class DriftMeter {
 
     private DriftMeter() {}
 
     /** The y component (m/s) of the drift, starting at the origin with u0 (m/s). */
-    static double exbDriftY(FullOrbitStepper s, Species sp, Field f, double[] u0, int steps) {
+    public static double exbDriftY(FullOrbitStepper s, Species sp, Field f, double[] u0, int steps) {
         s.start(0, new double[3], u0);
         double[] x0 = new double[3], u0s = new double[3], a0 = new double[3];
         double[] x1 = new double[3], u1 = new double[3], a1 = new double[3];

@@ -1,5 +1,6 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.reference.FullOrbitReference;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,5 +1,8 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.guidingcenter.GcRk4;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterStepper;
+import org.twinorbit.integrators.maps.InitialCondition;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.lang.management.ManagementFactory;

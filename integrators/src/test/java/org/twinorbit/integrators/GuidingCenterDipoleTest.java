@@ -1,5 +1,8 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.maps.InitialCondition;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.apache.commons.math3.analysis.UnivariateFunction;

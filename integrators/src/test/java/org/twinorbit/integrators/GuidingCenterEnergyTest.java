@@ -1,5 +1,9 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.guidingcenter.GuidingCenterEquations;
+import org.twinorbit.integrators.maps.InitialCondition;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.stream.Stream;

@@ -1,5 +1,11 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.guidingcenter.GcRk4;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrators;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterStepper;
+import org.twinorbit.integrators.maps.InitialCondition;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

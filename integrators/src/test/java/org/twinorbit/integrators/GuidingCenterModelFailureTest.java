@@ -1,5 +1,9 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.guidingcenter.GcRk4;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterStepper;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

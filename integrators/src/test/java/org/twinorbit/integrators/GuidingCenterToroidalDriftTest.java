@@ -1,5 +1,12 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.guidingcenter.GuidingCenterState;
+import org.twinorbit.integrators.maps.GyroMaps;
+import org.twinorbit.integrators.maps.GyroParticle;
+import org.twinorbit.integrators.maps.GyroPlacement;
+import org.twinorbit.integrators.maps.InitialCondition;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

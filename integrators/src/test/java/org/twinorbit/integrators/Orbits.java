@@ -1,25 +1,26 @@
 package org.twinorbit.integrators;
 
+import org.twinorbit.integrators.fullorbit.FullOrbitStepper;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Invariant;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;
 
 /** Small helpers the full-orbit tests share. */
-final class Orbits {
+public final class Orbits {
 
     private Orbits() {}
 
-    static double norm(double[] a) {
+    public static double norm(double[] a) {
         return Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
     }
 
-    static double distance(double[] a, double[] b) {
+    public static double distance(double[] a, double[] b) {
         return Math.sqrt((a[0] - b[0]) * (a[0] - b[0]) + (a[1] - b[1]) * (a[1] - b[1])
                 + (a[2] - b[2]) * (a[2] - b[2]));
     }
 
-    static double gamma(double[] u) {
+    public static double gamma(double[] u) {
         return Relativity.gammaFromU2(u[0] * u[0] + u[1] * u[1] + u[2] * u[2]);
     }
 
@@ -27,7 +28,7 @@ final class Orbits {
      * Runs a stepper and returns the largest relative change of an invariant in the first and in
      * the last tenth of the run: {first, last}.
      */
-    static double[] invariantDriftByTenths(FullOrbitStepper s, Species sp, Field f, Invariant inv,
+    public static double[] invariantDriftByTenths(FullOrbitStepper s, Species sp, Field f, Invariant inv,
                                             double[] x0, double[] u0, long steps) {
         s.start(0, x0, u0);
         double[] x = new double[3], u = new double[3];
@@ -54,7 +55,7 @@ final class Orbits {
     }
 
     /** The invariant of that name declared by the field. */
-    static Invariant invariant(Field f, String name) {
+    public static Invariant invariant(Field f, String name) {
         return f.invariants().stream().filter(i -> i.name().equals(name)).findFirst()
                 .orElseThrow(() -> new AssertionError("field " + f.name() + " declares no " + name
                         + "; it has " + f.invariants()));

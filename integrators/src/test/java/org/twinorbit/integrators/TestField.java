@@ -12,7 +12,7 @@ import org.twinorbit.shared.Vec3;
  * a smooth non-uniform field with E for one-step map tests, and fields with an edge or a NaN
  * region for the LOST / UNSTABLE checks.
  */
-abstract class TestField implements Field {
+public abstract class TestField implements Field {
 
     private final String name;
 
@@ -34,7 +34,7 @@ abstract class TestField implements Field {
     @Override public Vec3 defaultStart() { return Vec3.ZERO; }
 
     /** Constant B (T) and E (V/m); Φ = −E·x. */
-    static TestField constant(double bx, double by, double bz, double ex, double ey, double ez) {
+    public static TestField constant(double bx, double by, double bz, double ex, double ey, double ez) {
         boolean electric = ex != 0 || ey != 0 || ez != 0;
         return new TestField("constant") {
             @Override
@@ -65,7 +65,7 @@ abstract class TestField implements Field {
      * properties tested with it (volume, reversibility hold for any smooth B(x), E(x); Qin et al.
      * 2013).
      */
-    static TestField smooth(double b0, double e0, double l) {
+    public static TestField smooth(double b0, double e0, double l) {
         return new TestField("smooth") {
             @Override
             public void evaluate(double t, double x, double y, double z, FieldSample out) {
@@ -81,7 +81,7 @@ abstract class TestField implements Field {
     }
 
     /** Constant B = bz ẑ, no E, domain |x| < edge (m). */
-    static TestField walled(double bz, double edge) {
+    public static TestField walled(double bz, double edge) {
         return new TestField("walled") {
             @Override
             public void evaluate(double t, double x, double y, double z, FieldSample out) {
@@ -99,7 +99,7 @@ abstract class TestField implements Field {
     }
 
     /** Constant B = bz ẑ that turns to NaN beyond x > edge (m): a field gone wrong. */
-    static TestField poisoned(double bz, double edge) {
+    public static TestField poisoned(double bz, double edge) {
         return new TestField("poisoned") {
             @Override
             public void evaluate(double t, double x, double y, double z, FieldSample out) {

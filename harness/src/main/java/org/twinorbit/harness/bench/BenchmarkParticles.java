@@ -1,9 +1,9 @@
 package org.twinorbit.harness.bench;
 
+import org.twinorbit.integrators.fullorbit.EnsembleStepper;
 import java.util.Map;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
-import org.twinorbit.integrators.EnsembleStepper;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;

@@ -1,5 +1,7 @@
 package org.twinorbit.harness.bench;
 
+import org.twinorbit.integrators.fullorbit.EnsembleStepper;
+import org.twinorbit.integrators.fullorbit.Pushers;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -16,8 +18,6 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.infra.Blackhole;
-import org.twinorbit.integrators.EnsembleStepper;
-import org.twinorbit.integrators.Pushers;
 
 /** Nanoseconds per particle-push for {@link #PARTICLES} particles in flat arrays, one step per invocation. */
 @State(Scope.Thread)

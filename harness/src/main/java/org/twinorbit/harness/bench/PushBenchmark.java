@@ -1,5 +1,8 @@
 package org.twinorbit.harness.bench;
 
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.integrators.fullorbit.FullOrbitStepper;
+import org.twinorbit.integrators.fullorbit.Pushers;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -16,9 +19,6 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.infra.Blackhole;
-import org.twinorbit.integrators.FullOrbitStepper;
-import org.twinorbit.integrators.OrbitStatus;
-import org.twinorbit.integrators.Pushers;
 
 /**
  * Nanoseconds per push of one particle: each invocation takes {@link #STEPS} steps of the

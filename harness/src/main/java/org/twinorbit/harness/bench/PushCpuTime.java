@@ -1,12 +1,12 @@
 package org.twinorbit.harness.bench;
 
+import org.twinorbit.integrators.fullorbit.FullOrbitStepper;
+import org.twinorbit.integrators.fullorbit.Pushers;
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.twinorbit.integrators.FullOrbitStepper;
-import org.twinorbit.integrators.Pushers;
 
 /**
  * A cross-check of {@link PushBenchmark} on a shared machine: ns per push in CPU time of the

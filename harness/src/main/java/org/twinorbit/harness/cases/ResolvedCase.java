@@ -1,9 +1,9 @@
 package org.twinorbit.harness.cases;
 
+import org.twinorbit.integrators.maps.InitialCondition;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.shared.FieldSample;
-import org.twinorbit.integrators.InitialCondition;
 import org.twinorbit.harness.Format;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;

@@ -1,7 +1,7 @@
 package org.twinorbit.harness.metrics;
 
+import org.twinorbit.integrators.reference.FullOrbitObserver;
 import org.twinorbit.fields.Field;
-import org.twinorbit.integrators.FullOrbitObserver;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;
 

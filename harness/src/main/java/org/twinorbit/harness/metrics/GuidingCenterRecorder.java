@@ -1,7 +1,7 @@
 package org.twinorbit.harness.metrics;
 
+import org.twinorbit.integrators.reference.GuidingCenterObserver;
 import org.twinorbit.fields.Field;
-import org.twinorbit.integrators.GuidingCenterObserver;
 import org.twinorbit.shared.Constants;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Species;

@@ -1,8 +1,8 @@
 package org.twinorbit.harness.metrics;
 
+import org.twinorbit.integrators.reference.FullOrbitObserver;
 import java.util.Arrays;
 import org.twinorbit.fields.Field;
-import org.twinorbit.integrators.FullOrbitObserver;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;

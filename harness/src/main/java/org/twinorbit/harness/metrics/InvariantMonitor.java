@@ -1,10 +1,10 @@
 package org.twinorbit.harness.metrics;
 
+import org.twinorbit.integrators.reference.FullOrbitObserver;
 import java.util.ArrayList;
 import java.util.List;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Invariant;
-import org.twinorbit.integrators.FullOrbitObserver;
 import org.twinorbit.shared.Species;
 
 /**

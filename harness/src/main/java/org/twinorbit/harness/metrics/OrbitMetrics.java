@@ -1,7 +1,7 @@
 package org.twinorbit.harness.metrics;
 
-import org.twinorbit.fields.Field;
 import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.fields.Field;
 import org.twinorbit.shared.FieldSample;
 
 /**

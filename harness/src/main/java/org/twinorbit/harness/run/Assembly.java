@@ -1,5 +1,6 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.OrbitStatus;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -11,7 +12,6 @@ import org.twinorbit.harness.metrics.GyroAverager;
 import org.twinorbit.harness.metrics.OrbitMetrics;
 import org.twinorbit.harness.metrics.OrbitMetrics.OrbitClass;
 import org.twinorbit.harness.metrics.Track;
-import org.twinorbit.integrators.OrbitStatus;
 
 /** Turns the records of a finished {@link CaseRunner.Plan} into rows, in a fixed order. */
 final class Assembly {

@@ -1,5 +1,12 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.integrators.fullorbit.FullOrbitPusher;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterState;
+import org.twinorbit.integrators.maps.GyroParticle;
+import org.twinorbit.integrators.maps.GyroPlacement;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import java.util.ArrayList;
 import java.util.List;
 import org.twinorbit.harness.BadInputException;
@@ -9,13 +16,6 @@ import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.metrics.GyroAverager;
 import org.twinorbit.harness.metrics.Track;
 import org.twinorbit.harness.cases.ResolvedCase;
-import org.twinorbit.integrators.FullOrbitPusher;
-import org.twinorbit.integrators.GuidingCenterIntegrator;
-import org.twinorbit.integrators.GuidingCenterResult;
-import org.twinorbit.integrators.GuidingCenterState;
-import org.twinorbit.integrators.GyroParticle;
-import org.twinorbit.integrators.GyroPlacement;
-import org.twinorbit.integrators.OrbitStatus;
 import org.twinorbit.shared.Relativity;
 
 /**

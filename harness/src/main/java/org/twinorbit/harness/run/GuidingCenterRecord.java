@@ -1,8 +1,8 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import java.util.List;
 import org.twinorbit.harness.metrics.GuidingCenterRecorder;
-import org.twinorbit.integrators.GuidingCenterResult;
 
 /**
  * One guiding-center integration as recorded.

@@ -1,16 +1,16 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.integrators.fullorbit.FullOrbitPusher;
+import org.twinorbit.integrators.fullorbit.FullOrbitStepper;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterStepper;
+import org.twinorbit.integrators.reference.FullOrbitObserver;
 import org.twinorbit.fields.Field;
 import org.twinorbit.harness.metrics.EnergyMonitor;
 import org.twinorbit.harness.metrics.GuidingCenterRecorder;
 import org.twinorbit.harness.metrics.GyroAverager;
 import org.twinorbit.harness.metrics.InvariantMonitor;
-import org.twinorbit.integrators.FullOrbitObserver;
-import org.twinorbit.integrators.FullOrbitPusher;
-import org.twinorbit.integrators.FullOrbitStepper;
-import org.twinorbit.integrators.GuidingCenterIntegrator;
-import org.twinorbit.integrators.GuidingCenterStepper;
-import org.twinorbit.integrators.OrbitStatus;
 import org.twinorbit.shared.Species;
 
 /**

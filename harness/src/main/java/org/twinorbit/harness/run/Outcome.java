@@ -2,6 +2,7 @@ package org.twinorbit.harness.run;
 
 import org.twinorbit.integrators.OrbitStatus;
 
+
 /**
  * How one integration ended and what it cost.
  *

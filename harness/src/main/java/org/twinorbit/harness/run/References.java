@@ -1,10 +1,10 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.reference.FullOrbitReference;
+import org.twinorbit.integrators.reference.GuidingCenterReference;
+import org.twinorbit.integrators.reference.GuidingCenterResult;
 import org.twinorbit.fields.Field;
 import org.twinorbit.harness.metrics.GuidingCenterRecorder;
-import org.twinorbit.integrators.FullOrbitReference;
-import org.twinorbit.integrators.GuidingCenterReference;
-import org.twinorbit.integrators.GuidingCenterResult;
 import org.twinorbit.shared.Species;
 
 /**

@@ -1,10 +1,10 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.fullorbit.FullOrbitPusher;
+import org.twinorbit.integrators.fullorbit.Pushers;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator;
+import org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrators;
 import java.util.List;
-import org.twinorbit.integrators.FullOrbitPusher;
-import org.twinorbit.integrators.GuidingCenterIntegrator;
-import org.twinorbit.integrators.GuidingCenterIntegrators;
-import org.twinorbit.integrators.Pushers;
 
 /** The integrators on the class path by name, with messages that name the harness option. */
 public final class Registry {

@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.integrators.fullorbit.Pushers;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;

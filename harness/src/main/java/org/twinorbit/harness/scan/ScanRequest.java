@@ -1,5 +1,6 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.integrators.fullorbit.Pushers;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;

@@ -1,5 +1,7 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.maps.GyroParticle;
+import org.twinorbit.integrators.maps.GyroPlacement;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,8 +11,6 @@ import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussInteg
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.twinorbit.harness.cases.CaseSpec;
-import org.twinorbit.integrators.GyroParticle;
-import org.twinorbit.integrators.GyroPlacement;
 import org.twinorbit.shared.Species;
 
 /**

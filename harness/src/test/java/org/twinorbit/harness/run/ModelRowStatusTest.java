@@ -1,12 +1,12 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.OrbitStatus;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.twinorbit.harness.cases.CaseSpec;
-import org.twinorbit.integrators.OrbitStatus;
 
 /**
  * The model row compares two models, so its status must say what happened to both. In the

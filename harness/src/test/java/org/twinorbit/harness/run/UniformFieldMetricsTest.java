@@ -1,5 +1,6 @@
 package org.twinorbit.harness.run;
 
+import org.twinorbit.integrators.fullorbit.Pushers;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,7 +10,6 @@ import org.twinorbit.fields.Fields;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.harness.metrics.GyroAverager;
 import org.twinorbit.harness.metrics.OrbitMetrics;
-import org.twinorbit.integrators.Pushers;
 import org.twinorbit.shared.Gyration;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;

@@ -1,5 +1,8 @@
 package org.twinorbit.harness.scan;
 
+import org.twinorbit.integrators.maps.GyroParticle;
+import org.twinorbit.integrators.maps.GyroPlacement;
+import org.twinorbit.integrators.maps.InitialCondition;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,9 +12,6 @@ import org.junit.jupiter.api.Test;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import java.util.List;
-import org.twinorbit.integrators.GyroParticle;
-import org.twinorbit.integrators.GyroPlacement;
-import org.twinorbit.integrators.InitialCondition;
 import org.twinorbit.shared.Relativity;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;

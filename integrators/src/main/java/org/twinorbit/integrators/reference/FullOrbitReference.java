@@ -1,0 +1,277 @@
+package org.twinorbit.integrators.reference;
+
+import org.twinorbit.integrators.OrbitStatus;
+import org.twinorbit.integrators.fullorbit.LorentzEquations;
+import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.apache.commons.math3.ode.events.EventHandler;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import org.apache.commons.math3.ode.sampling.FixedStepHandler;
+import org.apache.commons.math3.ode.sampling.StepHandler;
+import org.apache.commons.math3.ode.sampling.StepInterpolator;
+import org.apache.commons.math3.ode.sampling.StepNormalizer;
+import org.apache.commons.math3.ode.sampling.StepNormalizerBounds;
+import org.apache.commons.math3.ode.sampling.StepNormalizerMode;
+import org.twinorbit.fields.Field;
+import org.twinorbit.shared.Constants;
+import org.twinorbit.shared.FieldSample;
+import org.twinorbit.shared.Relativity;
+import org.twinorbit.shared.Species;
+import org.twinorbit.shared.Vec3;
+
+/**
+ * The full-orbit reference: the Lorentz equations in (x, u = γv) integrated by the adaptive
+ * Dormand–Prince 8(5,3) method of Commons Math (J. R. Dormand & P. J. Prince, J. Comput. Appl.
+ * Math. 6, 19, 1980; E. Hairer, S. P. Nørsett & G. Wanner, Solving Ordinary Differential
+ * Equations I, 1993, §II.10, section from memory) at a tight tolerance, with dense output sampled at a fixed interval,
+ * an event that stops the run where the particle leaves the field's domain (status LOST at the
+ * crossing time), and an estimate of its own error from the same run at a 100× tighter
+ * tolerance.
+ *
+ * <p>Tolerances: relative rtol on every component; absolute rtol·ρ0 on positions and rtol·|u0|
+ * on velocities, so that components passing through zero are held to the orbit's own scale.
+ */
+public final class FullOrbitReference {
+
+    /** Default relative tolerance: tight enough for 10⁴–10⁵ gyrations (DESIGN.md). */
+    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-11;
+    /**
+     * The tightest relative tolerance used: below ~1e-14 the error of an 8th-order step in double
+     * precision is set by round-off, not by the tolerance (common practice).
+     */
+    public static final double TIGHTEST_RELATIVE_TOLERANCE = 1e-14;
+
+    private final Field field;
+    private final Species species;
+    private final double rtol;
+
+    /** A reference at {@link #DEFAULT_RELATIVE_TOLERANCE}. */
+    public FullOrbitReference(Field field, Species species) {
+        this(field, species, DEFAULT_RELATIVE_TOLERANCE);
+    }
+
+    /** @param relativeTolerance relative tolerance, in [1e-14, 1e-3] */
+    public FullOrbitReference(Field field, Species species, double relativeTolerance) {
+        if (!(relativeTolerance >= TIGHTEST_RELATIVE_TOLERANCE && relativeTolerance <= 1e-3)) {
+            throw new IllegalArgumentException("reference relative tolerance must be in ["
+                    + TIGHTEST_RELATIVE_TOLERANCE + ", 1e-3], got " + relativeTolerance);
+        }
+        this.field = field;
+        this.species = species;
+        this.rtol = relativeTolerance;
+    }
+
+    /** The relative tolerance of this reference. */
+    public double relativeTolerance() {
+        return rtol;
+    }
+
+    /**
+     * The outcome of one reference run.
+     *
+     * @param status      OK (reached the end time), LOST (left the domain) or UNSTABLE
+     * @param endTime     time (s) the run ended: the requested end, the domain crossing, or the
+     *                    last good step
+     * @param position    position (m) at endTime
+     * @param velocity    u = γv (m/s) at endTime
+     * @param evaluations right-hand-side (= field) evaluations
+     * @param lengthScale ρ0 (m), the scale of the position tolerance
+     * @param speedScale  |u0| (m/s), the scale of the velocity tolerance
+     */
+    public record Result(OrbitStatus status, double endTime, Vec3 position, Vec3 velocity,
+                         long evaluations, double lengthScale, double speedScale) {}
+
+    /**
+     * The reference's estimate of its own error: the final-state difference to the same run at a
+     * 100× tighter tolerance (clamped at {@link #TIGHTEST_RELATIVE_TOLERANCE}). It is honest when
+     * the tighter run is much more accurate, i.e. while the tolerance is well above round-off; at
+     * the tightest tolerance both runs are the same and the estimate is zero, which says nothing.
+     *
+     * @param result        the run at this reference's tolerance
+     * @param tighter       the same run at the tighter tolerance
+     * @param positionError |x − x_tight| / ρ0 (dimensionless)
+     * @param velocityError |u − u_tight| / |u0| (dimensionless)
+     */
+    public record Estimate(Result result, Result tighter, double positionError, double velocityError) {}
+
+    /**
+     * Integrates from (x0, u0) at t0 to tEnd, reporting samples every {@code interval}.
+     *
+     * @param t0       start time (s)
+     * @param x0       start position (m)
+     * @param u0       start u = γv (m/s)
+     * @param tEnd     end time (s), after t0
+     * @param interval sampling interval (s) for the observer; ignored when observer is null
+     * @param observer receives (t, x, u) at t0, t0 + interval, ... and at the end; may be null
+     */
+    public Result run(double t0, double[] x0, double[] u0, double tEnd, double interval, FullOrbitObserver observer) {
+        return run(rtol, t0, x0, u0, tEnd, interval, observer);
+    }
+
+    /** {@link #run} without samples. */
+    public Result run(double t0, double[] x0, double[] u0, double tEnd) {
+        return run(rtol, t0, x0, u0, tEnd, 0, null);
+    }
+
+    /** Runs at this tolerance and at a 100× tighter one, and compares the final states. */
+    public Estimate estimate(double t0, double[] x0, double[] u0, double tEnd) {
+        Result a = run(rtol, t0, x0, u0, tEnd, 0, null);
+        Result b = run(Math.max(rtol / 100.0, TIGHTEST_RELATIVE_TOLERANCE), t0, x0, u0, tEnd, 0, null);
+        double dx = a.position().minus(b.position()).norm() / a.lengthScale();
+        double du = a.velocity().minus(b.velocity()).norm() / a.speedScale();
+        return new Estimate(a, b, dx, du);
+    }
+
+    private Result run(double tol, double t0, double[] x0, double[] u0, double tEnd, double interval,
+                       FullOrbitObserver observer) {
+        if (!(tEnd > t0)) {
+            throw new IllegalArgumentException("end time must be after the start time " + t0 + " s, got " + tEnd);
+        }
+        if (!field.inDomain(x0[0], x0[1], x0[2])) {
+            throw new IllegalArgumentException("start position (" + x0[0] + ", " + x0[1] + ", " + x0[2]
+                    + ") m lies outside the domain of field '" + field.name() + "': " + field.domainMeaning());
+        }
+        FieldSample s = new FieldSample();
+        field.evaluate(t0, x0[0], x0[1], x0[2], s);
+        double u = Math.sqrt(u0[0] * u0[0] + u0[1] * u0[1] + u0[2] * u0[2]);
+        double b = s.bMag();
+        // ρ0 = m|u|/(|q|B); without B or without motion the scales fall back to 1 m and c
+        double rho = species.mass() * u / (Math.abs(species.charge()) * b);
+        double length = rho > 0 && Double.isFinite(rho) ? rho : 1.0;
+        double speed = u > 0 ? u : Constants.C;
+        double gyroPeriod = 2 * Math.PI * Relativity.gammaFromU2(u * u) * species.mass() / (Math.abs(species.charge()) * b);
+        double span = tEnd - t0;
+        double timeScale = gyroPeriod > 0 && gyroPeriod < span ? gyroPeriod : span;
+
+        double[] atol = {tol * length, tol * length, tol * length, tol * speed, tol * speed, tol * speed};
+        double[] rtols = {tol, tol, tol, tol, tol, tol};
+        DormandPrince853Integrator dp = new DormandPrince853Integrator(0.0, span, atol, rtols);
+
+        Equations eq = new Equations(new LorentzEquations(field, species));
+        LastStep last = new LastStep(t0, x0, u0);
+        dp.addStepHandler(last);
+        if (observer != null) {
+            if (!(interval > 0)) {
+                throw new IllegalArgumentException("sampling interval must be positive, got " + interval + " s");
+            }
+            dp.addStepHandler(new StepNormalizer(interval, new Sampler(observer),
+                    StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
+        }
+        DomainExit exit = new DomainExit(field);
+        // check the domain at least 8 times per gyration so that no excursion is missed;
+        // locate the crossing to 1e-12 of the time scale
+        dp.addEventHandler(exit, timeScale / 8, 1e-12 * timeScale, 1000);
+
+        double[] y = {x0[0], x0[1], x0[2], u0[0], u0[1], u0[2]};
+        OrbitStatus status = OrbitStatus.OK;
+        double end;
+        try {
+            end = dp.integrate(eq, t0, y, tEnd, y);
+            if (exit.crossed) {
+                status = OrbitStatus.LOST;
+            }
+        } catch (NonFinite e) {
+            status = OrbitStatus.UNSTABLE;
+            end = last.t;
+            System.arraycopy(last.y, 0, y, 0, 6);
+        }
+        return new Result(status, end, new Vec3(y[0], y[1], y[2]), new Vec3(y[3], y[4], y[5]),
+                eq.lorentz.evaluations(), length, speed);
+    }
+
+    /** The Lorentz equations as Commons Math sees them; refuses a non-finite state. */
+    private static final class Equations implements FirstOrderDifferentialEquations {
+        final LorentzEquations lorentz;
+
+        Equations(LorentzEquations lorentz) {
+            this.lorentz = lorentz;
+        }
+
+        @Override public int getDimension() { return 6; }
+
+        @Override
+        public void computeDerivatives(double t, double[] y, double[] yDot) {
+            lorentz.derivatives(t, y, yDot);
+            for (int i = 0; i < 6; i++) {
+                if (!Double.isFinite(y[i]) || !Double.isFinite(yDot[i])) {
+                    throw new NonFinite();
+                }
+            }
+        }
+    }
+
+    /** Thrown from the equations to abort a run whose state went NaN or infinite. */
+    private static final class NonFinite extends RuntimeException {
+        NonFinite() {
+            super("non-finite state", null, false, false);
+        }
+    }
+
+    /** Hands the normalised samples to the observer as (t, x, u). */
+    private static final class Sampler implements FixedStepHandler {
+        private final FullOrbitObserver observer;
+        private final double[] xs = new double[3], us = new double[3];
+
+        Sampler(FullOrbitObserver observer) {
+            this.observer = observer;
+        }
+
+        @Override public void init(double t0, double[] y0, double t) {}
+
+        @Override
+        public void handleStep(double t, double[] y, double[] yDot, boolean isLast) {
+            System.arraycopy(y, 0, xs, 0, 3);
+            System.arraycopy(y, 3, us, 0, 3);
+            observer.observe(t, xs, us);
+        }
+    }
+
+    /** Remembers the last accepted step, the state kept when a run goes unstable. */
+    private static final class LastStep implements StepHandler {
+        double t;
+        final double[] y = new double[6];
+
+        LastStep(double t0, double[] x0, double[] u0) {
+            t = t0;
+            System.arraycopy(x0, 0, y, 0, 3);
+            System.arraycopy(u0, 0, y, 3, 3);
+        }
+
+        @Override public void init(double t0, double[] y0, double t) {}
+
+        @Override
+        public void handleStep(StepInterpolator interpolator, boolean isLast) {
+            t = interpolator.getCurrentTime();
+            System.arraycopy(interpolator.getInterpolatedState(), 0, y, 0, 6);
+        }
+    }
+
+    /** Stops the run where the field's domain margin changes sign. */
+    private static final class DomainExit implements EventHandler {
+        private final Field field;
+        boolean crossed;
+
+        DomainExit(Field field) {
+            this.field = field;
+        }
+
+        @Override public void init(double t0, double[] y0, double t) {}
+
+        @Override
+        public double g(double t, double[] y) {
+            double m = field.domainMargin(y[0], y[1], y[2]);
+            // an unbounded field reports +∞; the root finder needs finite values
+            return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, m));
+        }
+
+        @Override
+        public Action eventOccurred(double t, double[] y, boolean increasing) {
+            if (increasing) {
+                return Action.CONTINUE;
+            }
+            crossed = true;
+            return Action.STOP;
+        }
+
+        @Override public void resetState(double t, double[] y) {}
+    }
+}
