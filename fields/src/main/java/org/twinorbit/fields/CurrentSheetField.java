@@ -61,6 +61,8 @@ public final class CurrentSheetField implements Field {
     @Override public double length() { return curvatureRadius(); }
     /** κ = sqrt(R_c/ρ) is defined with ρ in Bn, so ε is too, wherever the particle starts. */
     @Override public double epsilonFieldStrength(double bAtStart) { return bn; }
+    /** The sheet is the plane z = 0, where B_x reverses. */
+    @Override public double[] sheetNormal() { return new double[] {0, 0, 1}; }
     @Override public String lengthMeaning() {
         return "R_c = delta Bn/B0, the field-line curvature radius at z = 0 (rho taken in Bn)";
     }

@@ -35,6 +35,15 @@ public interface Field {
     /** Text saying what L is for this field (e.g. "Lm, the mirror half-length"). */
     String lengthMeaning();
 
+    /**
+     * Unit normal (dimensionless) of a current sheet through the origin that guiding centers
+     * cross — the plane where the duration unit {@code crossings} counts passages; null for a
+     * field without one.
+     */
+    default double[] sheetNormal() {
+        return null;
+    }
+
     /** The characteristic time scale (s) of a time-dependent field; +∞ for a static field. */
     default double timeScale() {
         return Double.POSITIVE_INFINITY;

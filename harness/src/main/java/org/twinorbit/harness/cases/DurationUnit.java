@@ -5,7 +5,13 @@ public enum DurationUnit {
     /** Initial gyroperiods T_c = 2πγm/(|q|B) at the starting guiding center. */
     GYROPERIODS("gyroperiods"),
     /** Bounce periods of a trapped orbit, measured first on the guiding-center reference. */
-    BOUNCES("bounces");
+    BOUNCES("bounces"),
+    /**
+     * Crossings of a field's current sheet ({@code Field.sheetNormal()}): the run lasts until the
+     * guiding-center reference has crossed the sheet that many times and come back to its starting
+     * distance from it, plus two gyroperiods so that a whole gyration after the exit is seen.
+     */
+    CROSSINGS("crossings");
 
     private final String label;
 
@@ -26,6 +32,6 @@ public enum DurationUnit {
             }
         }
         throw new IllegalArgumentException(option + ": unknown duration unit '" + text
-                + "'; allowed: gyroperiods, bounces");
+                + "'; allowed: gyroperiods, bounces, crossings");
     }
 }

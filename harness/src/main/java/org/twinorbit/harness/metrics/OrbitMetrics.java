@@ -41,28 +41,6 @@ public final class OrbitMetrics {
         return max;
     }
 
-    /**
-     * μ jump, the irreversible part: ⟨μ⟩ (interpolated between gyration mid-times) at each
-     * mirror point of the same direction — equivalent points of the bounce motion — compared
-     * with its value at the first one, max over the run, relative. Without two such points (no
-     * slow period) it is the change between the first and the last whole gyration.
-     */
-    public static double muJump(GyroAverager g) {
-        if (g.gyrations() < 2 || !(g.mu(0) > 0)) {
-            return Double.NaN;
-        }
-        double[] events = g.centers().upwardMirrorTimes();
-        if (events.length < 2) {
-            return Math.abs(g.mu(g.gyrations() - 1) - g.mu(0)) / g.mu(0);
-        }
-        double ref = muAt(g, events[0]);
-        double max = 0;
-        for (int i = 1; i < events.length; i++) {
-            max = Math.max(max, Math.abs(muAt(g, events[i]) - ref) / ref);
-        }
-        return max;
-    }
-
     /** ⟨μ⟩ at time t (s), linear between gyration mid-times. */
     static double muAt(GyroAverager g, double t) {
         Track c = g.centers();
@@ -155,30 +133,50 @@ public final class OrbitMetrics {
     }
 
     /**
-     * Drift error |V − V_ref| / |V_ref| of mean perpendicular velocities; NaN when the
+     * Signed drift error (V − V_ref)·V_ref / |V_ref|² of mean perpendicular velocities: the
+     * relative error of the drift speed along the reference drift, positive when the drift is too
+     * fast. Linear in V, so a phase mean cancels errors that depend on the gyrophase. NaN when the
      * reference drift is below {@code floor} (m/s), where a relative error means nothing.
      */
     public static double driftError(double[] v, double[] vRef, double floor) {
-        double ref = Math.sqrt(vRef[0] * vRef[0] + vRef[1] * vRef[1] + vRef[2] * vRef[2]);
-        if (!(ref > floor)) {
+        double ref2 = vRef[0] * vRef[0] + vRef[1] * vRef[1] + vRef[2] * vRef[2];
+        if (!(Math.sqrt(ref2) > floor)) {
             return Double.NaN;
         }
-        double dx = v[0] - vRef[0], dy = v[1] - vRef[1], dz = v[2] - vRef[2];
-        return Math.sqrt(dx * dx + dy * dy + dz * dz) / ref;
+        return ((v[0] - vRef[0]) * vRef[0] + (v[1] - vRef[1]) * vRef[1] + (v[2] - vRef[2]) * vRef[2]) / ref2;
     }
 
     /**
-     * |X − X_ref| / ρ0 at the last time both tracks reach. @param rho0 gyroradius (m)
+     * Signed position error per orbit period, in ρ0: |X − X_ref| / ρ0 at the last time t both
+     * tracks reach, divided by the number of slow periods the reference completed by then (whole
+     * bounce periods between its first and last mirror points of the same direction; 1 when it
+     * does not bounce), so that it stays comparable after many bounces. The sign says whether X is
+     * ahead (+) or behind (−) the reference along the reference's motion at t.
+     *
+     * @param rho0 gyroradius (m)
      */
     public static double positionError(Track a, Track ref, double rho0) {
-        if (a.size() == 0 || ref.size() == 0) {
+        if (a.size() == 0 || ref.size() < 2) {
             return Double.NaN;
         }
         double t = Math.min(a.lastTime(), ref.lastTime());
         double[] p = a.positionAt(t, new double[3]);
         double[] q = ref.positionAt(t, new double[3]);
-        return Math.sqrt((p[0] - q[0]) * (p[0] - q[0]) + (p[1] - q[1]) * (p[1] - q[1])
-                + (p[2] - q[2]) * (p[2] - q[2])) / rho0;
+        // the reference's direction of motion at t, from the chord ending there
+        double dt = Math.min(t - ref.firstTime(), (ref.lastTime() - ref.firstTime()) / (ref.size() - 1));
+        double[] q0 = ref.positionAt(t - dt, new double[3]);
+        double along = 0;
+        double d2 = 0;
+        for (int i = 0; i < 3; i++) {
+            along += (p[i] - q[i]) * (q[i] - q0[i]);
+            d2 += (p[i] - q[i]) * (p[i] - q[i]);
+        }
+        double[] ev = ref.upwardMirrorTimes();
+        int periods = 0;
+        for (int i = 1; i < ev.length; i++) {
+            periods += ev[i] <= t ? 1 : 0;
+        }
+        return Math.copySign(Math.sqrt(d2) / rho0 / Math.max(1, periods), along);
     }
 
     /** Bounce period (s): mean spacing of mirror points of the same direction; NaN with fewer than two. */

@@ -38,8 +38,12 @@ import org.twinorbit.harness.run.Stat;
  *             class_agreement (fraction of phases classed like the reference),
  *             mu_change, mu_jump, energy_error, phase_error, drift_error, position_error_rho,
  *             bounce_period_s, bounce_period_error, mirror_field_t, mirror_field_error —
- *             each {mean, worst} over the gyrophase ensemble (worst = largest magnitude, sign kept),
- *             invariant_error {invariant: {mean, worst}} (full-orbit rows; |I − I0|/S0 with S0 the
+ *             each {mean, rms, worst} over the gyrophase ensemble of the signed per-phase values
+ *             (worst = largest magnitude, sign kept; drift_error is along the reference drift,
+ *             position_error_rho per bounce period and signed ahead/behind),
+ *             mu_jump_from (the points mu_jump compared: sheet-exit | mirror-points |
+ *             first-last-gyration, '/'-joined when phases differ; null for a guiding-center row),
+ *             invariant_error {invariant: {mean, rms, worst}} (full-orbit rows; |I − I0|/S0 with S0 the
  *             invariant's scale at the start: m|u| for momenta, m|u|R for angular momenta),
  *             order (slope of log error vs log dt over dt, dt/2, dt/4; null when not measurable),
  *             convergence {dt_s [..], error_rho [..]} (end-position error of phase 0 against the reference),
@@ -115,6 +119,7 @@ public final class ResultJson {
         m.put("orbit_class", row.orbitClass());
         m.put("class_agreement", num(row.classAgreement()));
         row.metrics().forEach((k, v) -> m.put(k, stat(v)));
+        m.put("mu_jump_from", row.muJumpFrom());
         Map<String, Object> inv = new LinkedHashMap<>();
         row.invariants().forEach((k, v) -> inv.put(k, stat(v)));
         m.put("invariant_error", inv);
@@ -143,6 +148,7 @@ public final class ResultJson {
     private static Map<String, Object> stat(Stat s) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("mean", num(s.mean()));
+        m.put("rms", num(s.rms()));
         m.put("worst", num(s.worst()));
         return m;
     }

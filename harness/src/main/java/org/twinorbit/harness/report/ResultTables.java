@@ -85,6 +85,11 @@ public final class ResultTables {
                         + "gyration average (gc-start matched)"
                 : "model row: every gyrophase against one shared zeroth-order guiding center, offsets O(eps) per phase "
                         + "(gc-start shared)");
+        for (ResultRow row : r.rows()) {
+            if (row.errorKind().equals("model") && row.muJumpFrom() != null) {
+                l.add("mu jump compares: " + row.muJumpFrom());
+            }
+        }
         for (ReferenceSummary s : r.references()) {
             l.add(String.format(Locale.ROOT, "%s reference: %s, rtol %s, self-estimated error %s rho0, status %s",
                     s.model(), s.method(), Format.number(s.rtol()), Format.number(s.selfErrorRho()), s.status()));
@@ -98,6 +103,7 @@ public final class ResultTables {
                 "integrator", "model", "error_kind", "status", "status_time_s", "orbit_class", "class_agreement"));
         for (String m : org.twinorbit.harness.run.ResultRow.METRICS) {
             h.add(m + "_mean");
+            h.add(m + "_rms");
             h.add(m + "_worst");
         }
         h.addAll(List.of("invariant_error_worst", "order", "steps", "field_evaluations"));
@@ -114,6 +120,7 @@ public final class ResultTables {
                     row.errorKind(), row.status(), n(row.statusTime()), row.orbitClass(), n(row.classAgreement())));
             for (String m : ResultRow.METRICS) {
                 c.add(n(row.metric(m).mean()));
+                c.add(n(row.metric(m).rms()));
                 c.add(n(row.metric(m).worst()));
             }
             c.addAll(List.of(n(worstInvariant(row)), n(row.order()), n(row.steps()), n(row.fieldEvaluations())));

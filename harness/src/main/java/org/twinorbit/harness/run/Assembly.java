@@ -9,6 +9,7 @@ import java.util.TreeSet;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.twinorbit.fields.Field;
 import org.twinorbit.harness.metrics.GyroAverager;
+import org.twinorbit.harness.metrics.MuJump;
 import org.twinorbit.harness.metrics.OrbitMetrics;
 import org.twinorbit.harness.metrics.OrbitMetrics.OrbitClass;
 import org.twinorbit.harness.metrics.Track;
@@ -65,6 +66,7 @@ final class Assembly {
             OrbitClass[] refCls = new OrbitClass[nph];
             OrbitStatus[] st = new OrbitStatus[nph];
             double[] ends = new double[nph];
+            MuJump.From[] muFrom = new MuJump.From[nph];
             double steps = 0, evals = 0, wall = 0;
             for (int k = 0; k < nph; k++) {
                 FullOrbitRecord r = p.fo[i][k];
@@ -73,7 +75,9 @@ final class Assembly {
                 Track tr = g.centers();
                 Track refTr = ref.gyro().centers();
                 m.get("mu_change")[k] = OrbitMetrics.muChange(g);
-                m.get("mu_jump")[k] = OrbitMetrics.muJump(g);
+                MuJump jump = MuJump.of(g, p.sheetExit);
+                m.get("mu_jump")[k] = jump.value();
+                muFrom[k] = jump.from();
                 m.get("energy_error")[k] = r.energy().maxError();
                 m.get("phase_error")[k] = OrbitMetrics.phaseError(g, ref.gyro());
                 double[] w = OrbitMetrics.window(refTr);
@@ -99,7 +103,7 @@ final class Assembly {
                         ? distance(runs[l].finalX(), p.convRef.finalX()) / rho : Double.NaN;
                 wall += runs[l].outcome().wallNanos();
             }
-            rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, inv, cls, refCls,
+            rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, muFrom, inv, cls, refCls,
                     order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall));
         }
 
@@ -128,7 +132,8 @@ final class Assembly {
                         ? distance(runs[l].finalX(), ref.finalX()) / rho : Double.NaN;
                 wall += l > 0 ? runs[l].outcome().wallNanos() : 0;
             }
-            rows.add(row(p.gcs.get(gi).name(), "guiding-center", "discretisation", st, ends, m, new LinkedHashMap<>(),
+            rows.add(row(p.gcs.get(gi).name(), "guiding-center", "discretisation", st, ends, m, new MuJump.From[0],
+                    new LinkedHashMap<>(),
                     cls, refCls, order(dts, errs, gcSelf), dts, errs, r.outcome().steps(),
                     r.outcome().fieldEvaluations(), wall));
         }
@@ -141,6 +146,7 @@ final class Assembly {
             OrbitStatus[] st = new OrbitStatus[nph];
             String[] labels = new String[nph];
             double[] ends = new double[nph];
+            MuJump.From[] muFrom = new MuJump.From[nph];
             for (int k = 0; k < nph; k++) {
                 // each phase's own guiding center where the start is matched, else the shared one
                 GuidingCenterRecord r = p.gcMatched[k] != null ? p.gcMatched[k] : p.gcRef;
@@ -148,7 +154,9 @@ final class Assembly {
                 Track tr = r.recorder().track();
                 Track refTr = ref.gyro().centers();
                 m.get("mu_change")[k] = OrbitMetrics.muChange(ref.gyro());
-                m.get("mu_jump")[k] = OrbitMetrics.muJump(ref.gyro());
+                MuJump jump = MuJump.of(ref.gyro(), p.sheetExit);
+                m.get("mu_jump")[k] = jump.value();
+                muFrom[k] = jump.from();
                 double[] w = OrbitMetrics.window(refTr);
                 m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
                 m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
@@ -163,7 +171,7 @@ final class Assembly {
                 }
             }
             GuidingCenterRecord r = p.gcRef;
-            ResultRow model = row("gc-reference", "guiding-center", "model", st, ends, m, new LinkedHashMap<>(), cls,
+            ResultRow model = row("gc-reference", "guiding-center", "model", st, ends, m, muFrom, new LinkedHashMap<>(), cls,
                     refCls, Double.NaN, new double[0], new double[0], r.outcome().steps(),
                     r.outcome().fieldEvaluations(), r.outcome().wallNanos());
             rows.add(withModelStatus(model, labels, ends));
@@ -244,7 +252,8 @@ final class Assembly {
     }
 
     private static ResultRow row(String name, String model, String kind, OrbitStatus[] st, double[] ends,
-                                 Map<String, double[]> m, Map<String, double[]> inv, OrbitClass[] cls,
+                                 Map<String, double[]> m, MuJump.From[] muFrom, Map<String, double[]> inv,
+                                 OrbitClass[] cls,
                                  OrbitClass[] refCls, double order, double[] dts, double[] errs,
                                  double steps, double evals, double wallNanos) {
         OrbitStatus worst = OrbitStatus.OK;
@@ -272,8 +281,15 @@ final class Assembly {
             agree += cls[k] == refCls[k] ? 1 : 0;
         }
         String classes = String.join("/", seen.stream().map(OrbitClass::label).toList());
+        TreeSet<MuJump.From> from = new TreeSet<>();
+        for (MuJump.From f : muFrom) {
+            if (f != null) {
+                from.add(f);
+            }
+        }
         return new ResultRow(name, model, kind, worst.label(), when, metrics, invariants, classes,
-                (double) agree / cls.length, order, dts, errs, steps < 0 ? Double.NaN : steps, evals, wallNanos * 1e-9);
+                (double) agree / cls.length, order, dts, errs, steps < 0 ? Double.NaN : steps, evals, wallNanos * 1e-9,
+                from.isEmpty() ? null : String.join("/", from.stream().map(MuJump.From::label).toList()));
     }
 
     /** Model-row statuses from the least to the most severe. */
@@ -316,7 +332,7 @@ final class Assembly {
         }
         return new ResultRow(r.integrator(), r.model(), r.errorKind(), worst, when, r.metrics(), r.invariants(),
                 r.orbitClass(), r.classAgreement(), r.order(), r.convergenceDt(), r.convergenceError(), r.steps(),
-                r.fieldEvaluations(), r.wallSeconds());
+                r.fieldEvaluations(), r.wallSeconds(), r.muJumpFrom());
     }
 
     private static int severity(OrbitStatus s) {

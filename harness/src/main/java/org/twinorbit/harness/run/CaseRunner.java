@@ -10,6 +10,7 @@ import org.twinorbit.integrators.reference.GuidingCenterResult;
 import java.util.ArrayList;
 import java.util.List;
 import org.twinorbit.harness.BadInputException;
+import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.DurationUnit;
 import org.twinorbit.harness.cases.GuidingCenterStart;
@@ -35,7 +36,9 @@ public final class CaseRunner {
     static final int PLOT_POINTS = 600;
     /** Factor by which the self-estimate runs tighten the reference tolerance (DESIGN.md). */
     static final double TIGHTER = 100;
-    /** Longest guiding-center run that looks for a bounce period (initial gyroperiods). */
+    /** Gyroperiods a crossing run goes on after the exit, so that a whole gyration lies beyond it. */
+    static final double SHEET_EXIT_MARGIN_GYRO = 2;
+    /** Longest guiding-center run that looks for a bounce period or a sheet exit (initial gyroperiods). */
     static final double BOUNCE_SEARCH_GYRO = 20000;
     /**
      * |v∥| below this fraction of the speed counts as zero when looking for mirror points: far
@@ -92,6 +95,9 @@ public final class CaseRunner {
         for (Plan p : plans) {
             if (p.c.durationUnit() == DurationUnit.BOUNCES) {
                 pre.add(new Parallel.Job(1, p::measureBounce));
+            } else if (p.c.durationUnit() == DurationUnit.CROSSINGS) {
+                p.checkSheet();
+                pre.add(new Parallel.Job(1, p::measureSheetExit));
             }
         }
         if (!pre.isEmpty()) {
@@ -138,6 +144,8 @@ public final class CaseRunner {
         final double speed;
         final double deadband;
         double bounce = Double.NaN;
+        /** When the guiding center has made its crossings and is back at its starting distance from the sheet (s); NaN unless the unit is crossings. */
+        double sheetExit = Double.NaN;
         double tEnd;
         long n;
         double dt;
@@ -202,18 +210,87 @@ public final class CaseRunner {
                     ? mp.get(2).time() - mp.get(0).time() : Double.NaN;
         }
 
+        /** Refuses the crossings unit where there is no sheet to cross or the start lies on it. */
+        void checkSheet() {
+            double[] nrm = rc.field().sheetNormal();
+            if (nrm == null) {
+                throw new BadInputException("duration-unit: crossings needs a field with a current sheet "
+                        + "(current-sheet); field '" + c.field() + "' has none");
+            }
+            if (c.duration() != Math.rint(c.duration()) || c.duration() < 1) {
+                throw new BadInputException("duration: crossings are counted in whole numbers >= 1, got "
+                        + c.duration());
+            }
+            if (!(Math.abs(sheetDistance(gc0)) > 0)) {
+                throw new BadInputException("start: a crossing run starts off the sheet; the guiding center of case '"
+                        + c.name() + "' lies on it");
+            }
+        }
+
+        /** Signed distance (m) of a point from the field's sheet plane. */
+        private double sheetDistance(double[] x) {
+            double[] nrm = rc.field().sheetNormal();
+            return nrm[0] * x[0] + nrm[1] * x[1] + nrm[2] * x[2];
+        }
+
+        /**
+         * Runs the guiding-center reference until it has crossed the sheet {@code duration} times
+         * and is back at its starting distance from it, on whichever side: that time is the exit.
+         */
+        void measureSheetExit() {
+            double span = BOUNCE_SEARCH_GYRO * rc.gyroPeriod();
+            long samples = (long) (4 * BOUNCE_SEARCH_GYRO);
+            GuidingCenterRecord r = References.guidingCenter(rc.field(), rc.species(), mu, gc0, pPar0,
+                    span, samples, c.referenceRtol(), 1, deadband, 0);
+            Track t = r.recorder().track();
+            double d0 = Math.abs(sheetDistance(gc0));
+            int crossings = 0;
+            double side = Math.signum(sheetDistance(gc0));
+            double[] x = new double[3];
+            double[] prev = gc0.clone();
+            double tPrev = 0;
+            for (int i = 0; i < t.size(); i++) {
+                x[0] = t.coord(i, 0);
+                x[1] = t.coord(i, 1);
+                x[2] = t.coord(i, 2);
+                double d = sheetDistance(x);
+                if (Math.signum(d) == -side) {
+                    crossings++;
+                    side = -side;
+                }
+                if (crossings >= c.duration() && Math.abs(d) >= d0) {
+                    // linear between the samples around the return to |d0|
+                    double dp = Math.abs(sheetDistance(prev));
+                    double f = Math.abs(d) > dp ? (d0 - dp) / (Math.abs(d) - dp) : 1;
+                    sheetExit = tPrev + Math.max(0, Math.min(1, f)) * (t.time(i) - tPrev);
+                    return;
+                }
+                System.arraycopy(x, 0, prev, 0, 3);
+                tPrev = t.time(i);
+            }
+        }
+
         /** Fixes the end time and the steps. */
         void schedule() {
             double unit = rc.gyroPeriod();
+            double span = c.duration();
             if (c.durationUnit() == DurationUnit.BOUNCES) {
                 if (!(bounce > 0)) {
                     throw new BadInputException("duration-unit: the orbit of case '" + c.name()
                             + "' does not bounce (it is passing or lost); give the duration in gyroperiods");
                 }
                 unit = bounce;
+            } else if (c.durationUnit() == DurationUnit.CROSSINGS) {
+                if (!(sheetExit > 0)) {
+                    throw new BadInputException("duration-unit: the guiding center of case '" + c.name()
+                            + "' does not cross the sheet " + Format.number(c.duration()) + " time(s) and come back to "
+                            + "its starting distance within " + Format.number(BOUNCE_SEARCH_GYRO)
+                            + " gyroperiods; give the duration in gyroperiods or bounces");
+                }
+                span = sheetExit / rc.gyroPeriod() + SHEET_EXIT_MARGIN_GYRO;
             }
             dt = rc.fullOrbitStep();
-            n = Math.max(1, (long) Math.ceil(c.duration() * unit / dt - 1e-9));
+            n = Math.max(1, (long) Math.ceil(span * unit / dt - 1e-9));
             tEnd = n * dt;
             samples = Math.max(1, (long) Math.ceil(tEnd / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO - 1e-9));
             gcN = Math.max(1, (long) Math.ceil(tEnd / (c.gcStepGyro() * rc.gyroPeriod()) - 1e-9));

@@ -25,11 +25,13 @@ import java.util.Map;
  * @param steps            steps per orbit (mean over the ensemble)
  * @param fieldEvaluations field evaluations per orbit (mean over the ensemble)
  * @param wallSeconds      wall time summed over the ensemble (s); never in JSON or CSV
+ * @param muJumpFrom       the points {@code mu_jump} compared ({@link org.twinorbit.harness.metrics.MuJump.From}
+ *                         labels, '/'-joined when phases differ); empty for a row without μ
  */
 public record ResultRow(String integrator, String model, String errorKind, String status, double statusTime,
                         Map<String, Stat> metrics, Map<String, Stat> invariants, String orbitClass,
                         double classAgreement, double order, double[] convergenceDt, double[] convergenceError,
-                        double steps, double fieldEvaluations, double wallSeconds) {
+                        double steps, double fieldEvaluations, double wallSeconds, String muJumpFrom) {
 
     /** Metric names in report order (the JSON and CSV field names). */
     public static final java.util.List<String> METRICS = java.util.List.of("mu_change", "mu_jump", "energy_error",

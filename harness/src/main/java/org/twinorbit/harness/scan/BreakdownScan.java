@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /**
  * One breakdown scan from start to written files: points measured in parallel with a checkpoint
@@ -15,9 +16,11 @@ import java.util.Map;
  * @param pitches    pitch angles (degrees)
  * @param axis       what ε means and how it reads as an energy
  * @param tolerances metric -> tolerances at which to find ε*
+ * @param statistic  the summary over the gyrophase ensemble compared with the tolerances; not a
+ *                   setting of the points, so a resumed scan may threshold another one
  */
 public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Double> pitches, ScanAxis axis,
-                            Map<ScanMetric, List<Double>> tolerances) {
+                            Map<ScanMetric, List<Double>> tolerances, PhaseStatistic statistic) {
 
     public BreakdownScan {
         settings = new LinkedHashMap<>(settings);
@@ -40,7 +43,7 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
     public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
         ScanCheckpoint cp = ScanCheckpoint.open(out, settings, resume);
         List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, pointThreads, progress);
-        ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis));
+        ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
         ScanOutputs.write(r, out);
         cp.delete();
         return r;

@@ -12,6 +12,7 @@ import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.metrics.Track;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.CaseRunner;
+import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.harness.run.ReferenceSummary;
 import org.twinorbit.harness.run.ResultRow;
 import org.twinorbit.harness.run.Stat;
@@ -23,10 +24,12 @@ import org.twinorbit.shared.Vec3;
  * The model error of the guiding-center approximation at one scan point (DESIGN.md "What is
  * measured"): one case of the harness's {@link CaseRunner} — the guiding-center reference
  * against the gyro-averaged full-orbit reference, both at the same tight tolerance, over a
- * gyrophase ensemble placed at zeroth order around one guiding center, with the references'
+ * gyrophase ensemble, each phase compared with its own guiding center unless the shared
+ * zeroth-order start is asked for ({@link GuidingCenterStart}), with the references'
  * self-estimated errors — read off its {@code model} row. The metrics are those of {@code run},
- * so a scan point and a {@code run} at the same energy give the same numbers. Thresholds use the
- * magnitude of the worst case; {@code class_change} is 1 for a phase whose orbit class (trapped,
+ * so a scan point and a {@code run} at the same energy give the same numbers. Each metric is kept
+ * as its phase mean (signed), rms and worst-case magnitude; thresholds read the one the scan's
+ * {@link PhaseStatistic} names; {@code class_change} is 1 for a phase whose orbit class (trapped,
  * passing, lost) differs between the models. In a time-dependent field the drifts oscillate and
  * their means over whole wave periods vanish, so there {@code drift_error} is the RMS over
  * gyrations of the difference of the perpendicular displacements over the RMS of the full
@@ -107,38 +110,63 @@ public final class ModelErrorEvaluator implements PointEvaluator {
     @Override
     public Map<String, Double> measure(double eps, double energyEv, double pitchDeg) {
         try {
-            return values(run(eps, energyEv, pitchDeg));
+            Run run = run(eps, energyEv, pitchDeg);
+            Map<String, Double> out = values(run.result());
+            out.put("no_bounce", run.noBounce() ? 1.0 : 0.0);
+            return out;
         } catch (IllegalArgumentException cannotPlace) {
             Map<String, Double> out = new LinkedHashMap<>();
             for (ScanMetric m : ScanMetric.values()) {
                 double v = m == ScanMetric.CLASS_CHANGE ? Double.NaN : Double.POSITIVE_INFINITY;
                 out.put(m.meanKey(), v);
+                out.put(m.rmsKey(), v);
                 out.put(m.worstKey(), v);
             }
             out.put("point_failed", 1.0);
             out.put("lost", 0.0);
+            out.put("no_bounce", 0.0);
             return out;
         }
     }
 
-    private CaseResult run(double eps, double energyEv, double pitchDeg) {
+    /**
+     * Runs one point. A bounce-counted point whose guiding center does not bounce (it passes or
+     * is lost) runs instead until it has crossed the field's current sheet once and come back to
+     * its starting distance, where the field has a sheet and the start lies off it, else for
+     * {@link #NO_BOUNCE_GYRO} gyroperiods; either way the point records {@code no_bounce} = 1.
+     */
+    private Run run(double eps, double energyEv, double pitchDeg) {
         CaseRunner runner = new CaseRunner(threads, true);
-        CaseResult r;
-        switch (duration.unit()) {
-            case GYROPERIODS -> r = runner.run(caseAt(eps, energyEv, pitchDeg, duration.value(), DurationUnit.GYROPERIODS));
-            case FIELD_PERIODS -> r = runner.run(caseAt(eps, energyEv, pitchDeg,
-                    Math.max(duration.value() * recipe.periodInGyroperiods(eps), MIN_GYRO), DurationUnit.GYROPERIODS));
-            default -> {
+        return switch (duration.unit()) {
+            case GYROPERIODS -> new Run(runner.run(caseAt(eps, energyEv, pitchDeg, duration.value(),
+                    DurationUnit.GYROPERIODS)), false);
+            case FIELD_PERIODS -> new Run(runner.run(caseAt(eps, energyEv, pitchDeg,
+                    Math.max(duration.value() * recipe.periodInGyroperiods(eps), MIN_GYRO), DurationUnit.GYROPERIODS)),
+                    false);
+            case CROSSINGS -> new Run(runner.run(caseAt(eps, energyEv, pitchDeg, duration.value(),
+                    DurationUnit.CROSSINGS)), false);
+            case BOUNCES -> {
                 try {
-                    r = runner.run(caseAt(eps, energyEv, pitchDeg, duration.value(), DurationUnit.BOUNCES));
+                    yield new Run(runner.run(caseAt(eps, energyEv, pitchDeg, duration.value(), DurationUnit.BOUNCES)),
+                            false);
                 } catch (BadInputException noBounce) {
-                    // the guiding center passes or is lost: no bounce to count, a fixed span instead
-                    r = runner.run(caseAt(eps, energyEv, pitchDeg, NO_BOUNCE_GYRO, DurationUnit.GYROPERIODS));
+                    yield new Run(runner.run(offSheet(eps)
+                            ? caseAt(eps, energyEv, pitchDeg, 1, DurationUnit.CROSSINGS)
+                            : caseAt(eps, energyEv, pitchDeg, NO_BOUNCE_GYRO, DurationUnit.GYROPERIODS)), true);
                 }
             }
-        }
-        return r;
+        };
     }
+
+    /** True where the field has a current sheet and the scan's start lies off it. */
+    private boolean offSheet(double eps) {
+        double[] n = org.twinorbit.fields.Fields.create(field, recipe.parametersAt(parameters, eps), species)
+                .sheetNormal();
+        return n != null && n[0] * start.x() + n[1] * start.y() + n[2] * start.z() != 0;
+    }
+
+    /** One point's result, and whether its bounce count fell back to another span. */
+    private record Run(CaseResult result, boolean noBounce) {}
 
     private Map<String, Double> values(CaseResult r) {
         ResultRow model = r.rows().stream().filter(x -> x.errorKind().equals("model")).findFirst().orElseThrow();
@@ -152,13 +180,16 @@ public final class ModelErrorEvaluator implements PointEvaluator {
         out.put("lost", allLost ? 1.0 : 0.0);
         for (ScanMetric m : ScanMetric.values()) {
             Stat s = switch (m) {
-                case CLASS_CHANGE -> new Stat(1 - model.classAgreement(), model.classAgreement() < 1 ? 1 : 0);
+                // per phase 1 where the class differs, else 0
+                case CLASS_CHANGE -> new Stat(1 - model.classAgreement(), Math.sqrt(1 - model.classAgreement()),
+                        model.classAgreement() < 1 ? 1 : 0);
                 case DRIFT_ERROR -> r.resolved().field().isStatic() ? model.metric(m.key())
-                        : single(displacementError(r.resolved().field(), r.fullOrbitCenters(), r.gcTrack()));
+                        : Stat.single(displacementError(r.resolved().field(), r.fullOrbitCenters(), r.gcTrack()));
                 default -> model.metric(m.key());
             };
             boolean infinite = failed && m != ScanMetric.CLASS_CHANGE;
             out.put(m.meanKey(), infinite ? Double.POSITIVE_INFINITY : s.mean());
+            out.put(m.rmsKey(), infinite ? Double.POSITIVE_INFINITY : s.rms());
             out.put(m.worstKey(), infinite ? Double.POSITIVE_INFINITY : Math.abs(s.worst()));
         }
         for (ReferenceSummary ref : r.references()) {
@@ -195,9 +226,6 @@ public final class ModelErrorEvaluator implements PointEvaluator {
         return integrator.replace('-', '_') + "_" + metric + "_worst";
     }
 
-    private static Stat single(double v) {
-        return new Stat(v, v);
-    }
 
     /**
      * RMS over successive gyrations of |ΔX⊥,gc − ΔX⊥,fo| over RMS |ΔX⊥,fo|, ΔX the displacement

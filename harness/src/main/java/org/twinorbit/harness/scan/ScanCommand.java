@@ -10,6 +10,7 @@ import java.util.Map;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.harness.cases.GuidingCenterStart;
+import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.shared.Species;
 import org.twinorbit.harness.ExecutionOptions;
 import picocli.CommandLine.Command;
@@ -88,8 +89,13 @@ public final class ScanCommand implements Runnable {
     @Option(names = "--tolerance", paramLabel = "METRIC=TOL[,TOL...]",
             description = "Tolerance(s) of a metric at which eps* is found, repeatable; metrics: mu_jump (1%%), "
                     + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0), "
-                    + "mu_change (none by default). Metrics not named keep their default.")
+                    + "mu_change, mirror_field_error (none by default). Metrics not named keep their default.")
     Map<String, String> tolerances = new LinkedHashMap<>();
+
+    @Option(names = "--statistic", paramLabel = "STAT", description = "Summary over the gyrophase ensemble that a "
+            + "tolerance is compared with: worst (largest magnitude over the phases), mean (phase mean of the signed "
+            + "error) or rms (over the phases) (default: ${DEFAULT-VALUE}).")
+    String statistic = "worst";
 
     @Option(names = "--gc-start", paramLabel = "START", description = "Start of the model's guiding centers: "
             + "matched (one per gyrophase, from the reference orbit's first gyration average) or shared (one "
@@ -202,11 +208,20 @@ public final class ScanCommand implements Runnable {
         q.duration = duration;
         q.durationUnit = durationUnit == null ? null : ScanDuration.Unit.parse(durationUnit);
         q.tolerances = tolerances();
+        q.statistic = statistic();
         q.referenceRtol = referenceRtol;
         q.gcStart = GuidingCenterStart.parse(gcStart, "--gc-start");
         q.integrators = integrators;
         q.threads = execution.threads();
         return q.build();
+    }
+
+    private PhaseStatistic statistic() {
+        try {
+            return PhaseStatistic.ofKey(statistic);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("--statistic: " + e.getMessage());
+        }
     }
 
     /** The --tolerance options parsed; the request checks their values. */

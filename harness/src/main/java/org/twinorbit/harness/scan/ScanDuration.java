@@ -18,6 +18,11 @@ public record ScanDuration(double value, Unit unit) {
         GYROPERIODS("gyroperiods"),
         /** Bounce periods, measured first on the guiding-center reference (trapped orbits). */
         BOUNCES("bounces"),
+        /**
+         * Crossings of a current sheet: until the guiding center has crossed it that many times and
+         * is back at its starting distance from it (the start must lie off the sheet).
+         */
+        CROSSINGS("crossings"),
         /** The time scale of a time-dependent field: τ for {@code ramp}, one wave period 2π/ω for {@code wave}. */
         FIELD_PERIODS("field-periods");
 

@@ -94,6 +94,7 @@ public final class ScanJson {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("metric", t.metric().key());
         m.put("tolerance", t.tolerance());
+        m.put("statistic", t.statistic().key());
         m.put("pitch_deg", t.pitchDeg());
         m.put("eps_star", number(t.epsStar()));
         m.put("energy_ev_star", number(t.energyEvStar()));

@@ -3,6 +3,7 @@ package org.twinorbit.harness.scan;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /**
  * The model errors a breakdown scan measures at every ε (DESIGN.md "What is measured"), each the
@@ -14,12 +15,14 @@ public enum ScanMetric {
     MU_JUMP("mu_jump", "irreversible change of gyro-averaged mu (relative)", 0.01),
     /** Largest change of the gyro-averaged μ, reversible ripple included; thresholded only when asked. */
     MU_CHANGE("mu_change", "largest change of gyro-averaged mu, ripple included (relative)", Double.NaN),
-    /** Mean perpendicular drift of the guiding center against the full orbit's, relative. */
-    DRIFT_ERROR("drift_error", "perpendicular drift velocity error (relative)", 0.05),
-    /** Guiding-center position at the end against the full orbit's, in initial gyroradii. */
-    POSITION_ERROR("position_error_rho", "end position error (units of rho0)", 1.0),
+    /** Mean perpendicular drift of the guiding center against the full orbit's, relative, along the drift. */
+    DRIFT_ERROR("drift_error", "perpendicular drift velocity error along the drift (relative)", 0.05),
+    /** Guiding-center position at the end against the full orbit's, in initial gyroradii per bounce period. */
+    POSITION_ERROR("position_error_rho", "end position error per bounce period (units of rho0)", 1.0),
     /** Bounce period of trapped orbits against the full orbit's, relative. */
     BOUNCE_ERROR("bounce_period_error", "bounce period error of trapped orbits (relative)", 0.01),
+    /** Mean |B| at the mirror points against the full orbit's, relative; thresholded only when asked. */
+    MIRROR_FIELD_ERROR("mirror_field_error", "field strength at the mirror points (relative)", Double.NaN),
     /**
      * Fraction of the ensemble whose fate differs between the models (trapped in one, lost in the
      * other): a breakdown of its own, so any difference at all exceeds the default tolerance 0.
@@ -60,9 +63,23 @@ public enum ScanMetric {
         return key + "_mean";
     }
 
-    /** The JSON/CSV key of the worst case over the gyrophase ensemble. */
+    /** The JSON/CSV key of the rms over the gyrophase ensemble. */
+    public String rmsKey() {
+        return key + "_rms";
+    }
+
+    /** The JSON/CSV key of the worst case (largest magnitude) over the gyrophase ensemble. */
     public String worstKey() {
         return key + "_worst";
+    }
+
+    /** The JSON/CSV key of a summary over the gyrophase ensemble. */
+    public String key(PhaseStatistic statistic) {
+        return switch (statistic) {
+            case WORST -> worstKey();
+            case MEAN -> meanKey();
+            case RMS -> rmsKey();
+        };
     }
 
     /** The metric with this key. @throws IllegalArgumentException listing the allowed keys */

@@ -3,6 +3,7 @@ package org.twinorbit.harness.scan;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /**
  * The measured model error at one ε and one pitch angle.
@@ -10,7 +11,8 @@ import java.util.Map;
  * @param eps      ε of the point (ρ0/L, or the time-scale ratio of a time-dependent field)
  * @param energyEv kinetic energy (eV)
  * @param pitchDeg pitch angle (degrees)
- * @param values   snake_case name -> value: each metric's {@code _mean} and {@code _worst}, plus
+ * @param values   snake_case name -> value: each metric's {@code _mean}, {@code _rms} and
+ *                 {@code _worst} (magnitude) over the gyrophase ensemble, plus
  *                 quantities particular to the field (e.g. {@code kappa}); NaN where not measured
  */
 public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String, Double> values) {
@@ -28,5 +30,10 @@ public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String
     /** The worst case of a metric over the ensemble, NaN when not measured. */
     public double worst(ScanMetric m) {
         return value(m.worstKey());
+    }
+
+    /** The magnitude of a metric's summary over the ensemble, NaN when not measured. */
+    public double magnitude(ScanMetric m, PhaseStatistic statistic) {
+        return Math.abs(value(m.key(statistic)));
     }
 }

@@ -9,6 +9,7 @@ import org.twinorbit.fields.Field;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.harness.cases.CaseSpec;
 import org.twinorbit.harness.cases.GuidingCenterStart;
+import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.harness.run.Registry;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
@@ -32,6 +33,9 @@ public final class ScanRequest {
     public int phases = 8;
     public Double duration;
     public ScanDuration.Unit durationUnit;
+    /** The summary over the gyrophase ensemble that thresholds compare with a tolerance. */
+    public PhaseStatistic statistic = PhaseStatistic.WORST;
+
     /** Tolerances by metric; metrics not named keep their default. */
     public Map<ScanMetric, List<Double>> tolerances = new LinkedHashMap<>();
     public double referenceRtol = CaseSpec.DEFAULT_RTOL;
@@ -81,6 +85,20 @@ public final class ScanRequest {
             throw new IllegalArgumentException("--duration-unit field-periods needs a time-dependent field (ramp, wave); "
                     + "field '" + field + "' is static: use gyroperiods or bounces");
         }
+        if (d.unit() == ScanDuration.Unit.CROSSINGS) {
+            double[] n = f.sheetNormal();
+            if (n == null) {
+                throw new IllegalArgumentException("--duration-unit crossings needs a field with a current sheet "
+                        + "(current-sheet); field '" + field + "' has none");
+            }
+            if (n[0] * x0.x() + n[1] * x0.y() + n[2] * x0.z() == 0) {
+                throw new IllegalArgumentException("--duration-unit crossings: the start lies on the sheet; "
+                        + "give --start off it (e.g. 0,0,z with z != 0)");
+            }
+            if (d.value() != Math.rint(d.value())) {
+                throw new IllegalArgumentException("--duration: crossings are counted in whole numbers, got " + d.value());
+            }
+        }
         if (!(referenceRtol >= 1e-13 && referenceRtol <= 1e-6)) {
             throw new IllegalArgumentException("--reference-rtol must lie in [1e-13, 1e-6], got " + referenceRtol);
         }
@@ -126,7 +144,7 @@ public final class ScanRequest {
         settings.put("gc_start", gcStart.label());
         ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
                 referenceRtol, pushers, gcs, threads, gcStart);
-        return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances()), ev);
+        return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances(), statistic), ev);
     }
 
     private ScanAxis axis(Field f, ScanField recipe, Vec3 x0, double hi) {

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.twinorbit.harness.Format;
+import org.twinorbit.harness.cases.GuidingCenterStart;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /** The Markdown (scan.md) and CSV (scan.csv) forms of a scan. */
 public final class ScanTables {
@@ -53,16 +55,23 @@ public final class ScanTables {
         for (Map.Entry<String, Object> e : r.settings().entrySet()) {
             sb.append("- ").append(e.getKey()).append(": ").append(show(e.getValue())).append('\n');
         }
+        String statistic = r.thresholds().isEmpty() ? PhaseStatistic.WORST.key()
+                : r.thresholds().get(0).statistic().key();
+        boolean shared = GuidingCenterStart.SHARED.label().equals(r.settings().get("gc_start"));
         sb.append("\nModel error: the guiding-center reference against the gyro-averaged full-orbit ")
-                .append("reference, both at tight tolerance; worst case over the gyrophase ensemble. ")
+                .append("reference, both at tight tolerance, over a gyrophase ensemble. ")
                 .append("eps* is the first eps (").append(r.axis().meaning())
-                .append(") whose worst-case error exceeds the tolerance, refined by log-log interpolation.\n\n")
-                .append("Reading the numbers: `_worst` is the largest magnitude over the ensemble, `_mean` the mean ")
-                .append("(signed for bounce_period_error). The particles are placed at zeroth order around one guiding ")
-                .append("center, so each phase starts with an O(eps) gyrophase-dependent offset; in a bouncing orbit it ")
-                .append("shifts the bounce period and, over several bounces, the position along the field line, which ")
-                .append("is why bounce_period_error and position_error_rho can grow like eps (or stay near a few rho0) ")
-                .append("while their signed ensemble mean is far smaller. `inf` marks a point where the guiding ")
+                .append(") whose ").append(statistic).append(" error over the ensemble exceeds the tolerance, ")
+                .append("refined by log-log interpolation.\n\n")
+                .append("Reading the numbers: each metric is signed per phase; `_mean` is the phase mean of the signed ")
+                .append("error, `_rms` the rms over the phases, `_worst` the largest magnitude. ")
+                .append(shared
+                        ? "Start: shared (zeroth order): the whole ring around one guiding center, so each phase "
+                                + "starts with an O(eps) gyrophase-dependent offset that dominates `_worst` and `_rms` of "
+                                + "the drift, bounce and position errors; their `_mean` is the model's error. "
+                        : "Start: matched: each phase is compared with its own guiding center (its first gyration "
+                                + "average), so every statistic measures the model. ")
+                .append("`inf` marks a point where the guiding ")
                 .append("center failed or the particles could not be placed (`point_failed` = 1); `lost` = 1 marks a point where ")
                 .append("both models lost the particle (a loss cone): it gives no threshold, and a pitch lost at every ")
                 .append("point has the outcome `lost`. ")
@@ -70,12 +79,13 @@ public final class ScanTables {
                 .append("tolerance), `*_evaluations` its field evaluations per orbit.\n\n");
         sb.append("## Thresholds\n\n");
         String derived = r.axis().derivedName();
-        sb.append("| metric | tolerance | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
+        sb.append("| metric | tolerance | statistic | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
                 .append(derived == null ? "" : " " + derived + "* |").append('\n');
-        sb.append("|---|---|---|---|---|---|").append(derived == null ? "" : "---|").append('\n');
+        sb.append("|---|---|---|---|---|---|---|").append(derived == null ? "" : "---|").append('\n');
         for (Threshold t : r.thresholds()) {
             boolean crossed = t.outcome().hasEpsStar();
             sb.append("| ").append(t.metric().key()).append(" | ").append(Format.number(t.tolerance()))
+                    .append(" | ").append(t.statistic().key())
                     .append(" | ").append(Format.number(t.pitchDeg())).append(" | ").append(t.outcome().label())
                     .append(" | ").append(crossed ? Format.number(t.epsStar()) : "—")
                     .append(" | ").append(crossed && r.axis().variesEnergy() ? Format.number(t.energyEvStar()) : "—")

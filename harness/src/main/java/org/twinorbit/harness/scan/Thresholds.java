@@ -3,6 +3,7 @@ package org.twinorbit.harness.scan;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /** ε* for every thresholded metric, tolerance and pitch angle of a scan. */
 public final class Thresholds {
@@ -14,9 +15,11 @@ public final class Thresholds {
      * @param pitches    the pitch angles scanned (degrees), in the order to report them
      * @param tolerances metric -> tolerances, in the order to report them
      * @param axis       how ε reads as an energy
+     * @param statistic  which summary over the gyrophase ensemble is compared with a tolerance
      */
     public static List<Threshold> find(List<ScanPoint> points, List<Double> pitches,
-                                       Map<ScanMetric, List<Double>> tolerances, ScanAxis axis) {
+                                       Map<ScanMetric, List<Double>> tolerances, ScanAxis axis,
+                                       PhaseStatistic statistic) {
         List<Threshold> out = new ArrayList<>();
         for (Map.Entry<ScanMetric, List<Double>> e : tolerances.entrySet()) {
             ScanMetric m = e.getKey();
@@ -28,12 +31,12 @@ public final class Thresholds {
                     // a point lost by both models (a loss cone) measures no breakdown: only the
                     // class comparison applies there
                     boolean classes = m == ScanMetric.CLASS_CHANGE;
-                    double[] worst = curve.stream().mapToDouble(p -> classes || !lost(p) ? p.worst(m) : Double.NaN)
-                            .toArray();
+                    double[] error = curve.stream()
+                            .mapToDouble(p -> classes || !lost(p) ? p.magnitude(m, statistic) : Double.NaN).toArray();
                     boolean allLost = !curve.isEmpty() && curve.stream().allMatch(Thresholds::lost);
                     ThresholdFinder.Crossing c = allLost && !classes
                             ? new ThresholdFinder.Crossing(ThresholdOutcome.LOST, Double.NaN)
-                            : ThresholdFinder.find(eps, worst, tol);
+                            : ThresholdFinder.find(eps, error, tol);
                     double firstLost = curve.stream().filter(Thresholds::lost).mapToDouble(ScanPoint::eps)
                             .min().orElse(Double.NaN);
                     if (!classes && c.outcome() == ThresholdOutcome.NOT_REACHED && !Double.isNaN(firstLost)) {
@@ -43,7 +46,7 @@ public final class Thresholds {
                     boolean hasEps = c.outcome() == ThresholdOutcome.CROSSED || c.outcome() == ThresholdOutcome.LOST_ABOVE;
                     double energy = hasEps && axis.variesEnergy()
                             ? axis.energyEv().applyAsDouble(c.epsStar()) : Double.NaN;
-                    out.add(new Threshold(m, tol, pitch, c.outcome(), c.epsStar(), energy));
+                    out.add(new Threshold(m, tol, statistic, pitch, c.outcome(), c.epsStar(), energy));
                 }
             }
         }

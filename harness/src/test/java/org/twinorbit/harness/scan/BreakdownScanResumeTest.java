@@ -15,6 +15,7 @@ import java.util.Map;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
@@ -50,7 +51,7 @@ class BreakdownScanResumeTest {
         tol.put(ScanMetric.MU_JUMP, List.of(0.01, 0.1));
         tol.put(ScanMetric.DRIFT_ERROR, List.of(0.05));
         tol.put(ScanMetric.POSITION_ERROR, List.of(1.0));
-        return new BreakdownScan(settings, EPS, PITCHES, ScanAxis.energy(scale), tol);
+        return new BreakdownScan(settings, EPS, PITCHES, ScanAxis.energy(scale), tol, PhaseStatistic.WORST);
     }
 
     @Test

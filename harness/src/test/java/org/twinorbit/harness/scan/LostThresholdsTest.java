@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.twinorbit.harness.run.PhaseStatistic;
 
 /**
  * Thresholds over points where the particle escapes in both models. The expected outcomes follow
@@ -21,7 +22,7 @@ class LostThresholdsTest {
 
     private static Threshold muJump(List<ScanPoint> pts) {
         return Thresholds.find(pts, List.of(60.0), Map.of(ScanMetric.MU_JUMP, List.of(0.01)),
-                new ScanAxis("rho0/L", true, e -> 1e3 * e, null, null)).get(0);
+                new ScanAxis("rho0/L", true, e -> 1e3 * e, null, null), PhaseStatistic.WORST).get(0);
     }
 
     @Test

@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.twinorbit.harness.run.PhaseStatistic;
 import org.junit.jupiter.api.io.TempDir;
 
 /** The files of the safe-use map, from made-up rows (computing a real map takes minutes). */
@@ -17,8 +18,8 @@ class SafeUseMapWriteTest {
 
     @Test
     void writesTableJsonCsvAndFigure(@TempDir Path dir) throws IOException {
-        Threshold crossed = new Threshold(ScanMetric.MU_JUMP, 0.01, 60, ThresholdOutcome.CROSSED, 0.09, 1.2e5);
-        Threshold open = new Threshold(ScanMetric.DRIFT_ERROR, 0.05, 60, ThresholdOutcome.NOT_REACHED, Double.NaN, Double.NaN);
+        Threshold crossed = new Threshold(ScanMetric.MU_JUMP, 0.01, PhaseStatistic.WORST, 60, ThresholdOutcome.CROSSED, 0.09, 1.2e5);
+        Threshold open = new Threshold(ScanMetric.DRIFT_ERROR, 0.05, PhaseStatistic.WORST, 60, ThresholdOutcome.NOT_REACHED, Double.NaN, Double.NaN);
         SafeUseMap.Result r = new SafeUseMap.Result(List.of(
                 new SafeUseMap.Row("mirror", "proton", "rho0/L", 60, 3e-3, 0.3, crossed),
                 new SafeUseMap.Row("mirror", "electron", "rho0/L", 60, 3e-3, 0.3, open)),

@@ -44,7 +44,13 @@ class ScanCommandInputTest {
         assertTrue(refused("--field", "uniform").contains("has no length L"));
         assertTrue(refused("--field", "mirror", "--energy", "1000").contains("--energy applies to ramp and wave only"));
         assertTrue(refused("--field", "mirror", "--duration-unit", "furlongs")
-                .contains("allowed: gyroperiods, bounces, field-periods"));
+                .contains("allowed: gyroperiods, bounces, crossings, field-periods"));
+        assertTrue(refused("--field", "mirror", "--duration-unit", "crossings").contains("needs a field with a current sheet"));
+        assertTrue(refused("--field", "current-sheet", "--duration-unit", "crossings").contains("the start lies on the sheet"));
+        assertTrue(refused("--field", "current-sheet", "--duration-unit", "crossings", "--start", "0,0,1e7",
+                "--duration", "1.5").contains("whole numbers"));
+        assertTrue(refused("--field", "mirror", "--statistic", "median")
+                .contains("--statistic: unknown statistic 'median'; allowed: worst, mean, rms"));
         assertTrue(refused("--field", "gradient", "--duration-unit", "field-periods").contains("needs a time-dependent field"));
         assertTrue(refused("--field", "mirror", "--field-param", "Rm=0.5").contains("'Rm'"));
         assertTrue(refused("--field", "mirror", "--integrators", "euler").contains("--integrators: unknown integrator 'euler'; allowed: "));
