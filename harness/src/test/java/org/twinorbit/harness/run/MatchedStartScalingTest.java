@@ -2,6 +2,14 @@ package org.twinorbit.harness.run;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -12,51 +20,118 @@ import org.twinorbit.harness.cases.CaseSpec;
  * differ from the gyro-averaged exact orbit's by O(ε²) (Northrop, The Adiabatic Motion of
  * Charged Particles, 1963; Littlejohn, J. Plasma Phys. 29, 1983). Compared with a guiding
  * center of its own (the matched start), the model row must show that: a log-log slope of at
- * least 1.8 over ε = 0.005–0.05. The zeroth-order ring around one shared guiding center gives each
- * phase an O(ε) offset in p∥ and position (in the toroidal field m R u_φ is exact, so a particle
- * at R0 + ρ cos θ has v∥ (1 + (ρ/R0) cos θ)), and the same fit then has slope ≈ 1.
+ * least 1.8 over ε = 0.005–0.05 for the worst phase, and the spread over phases (standard
+ * deviation of the signed per-phase errors) must shrink at least as fast. The zeroth-order ring
+ * around one shared guiding center gives each phase an O(ε) offset in p∥ and position (in the
+ * toroidal field m R u_φ is exact, so a particle at R0 + ρ cos θ has v∥ (1 + (ρ/R0) cos θ)), and
+ * the same fit then has slope ≈ 1.
+ *
+ * <p>Every fit is appended to {@code target/matched-start-scaling.md}, the table quoted in
+ * results/README.md.
  */
 class MatchedStartScalingTest {
 
     private static final double[] EPS = {0.005, 0.01, 0.02, 0.05};
+    private static final Path TABLE = Path.of("target", "matched-start-scaling.md");
 
-    private static double slope(String field, double pitch, String metric, String start, boolean bounces) {
-        SimpleRegression fit = new SimpleRegression();
-        for (double eps : EPS) {
+    /** Slopes of log |worst| and log spread against log ε. */
+    private record Fit(double worst, double spread, double[] worstValues) {}
+
+    private static Fit fit(String field, double pitch, String start, String metric, String gcStart, boolean bounces) {
+        return fit(EPS, field, pitch, start, metric, gcStart, bounces);
+    }
+
+    private static Fit fit(double[] eps, String field, double pitch, String start, String metric, String gcStart,
+                           boolean bounces) {
+        SimpleRegression w = new SimpleRegression();
+        SimpleRegression sd = new SimpleRegression();
+        double[] values = new double[eps.length];
+        for (int i = 0; i < eps.length; i++) {
             CaseSpec s = TestCases.spec(field, "none", "none");
-            s.eps = eps;
+            s.eps = eps[i];
             s.pitch = pitch;
             s.phases = 8;
             s.duration = bounces ? 2.0 : 20.0;
             s.durationUnit = bounces ? "bounces" : "gyroperiods";
-            s.gcStart = start;
-            ResultRow model = TestCases.row(TestCases.run(s), "gc-reference");
-            fit.addData(Math.log(eps), Math.log(Math.abs(model.metric(metric).worst())));
+            s.gcStart = gcStart;
+            if (!start.isEmpty()) {
+                s.start = Arrays.stream(start.split(";")).map(Double::valueOf).toList();
+            }
+            Stat st = TestCases.row(TestCases.run(s), "gc-reference").metric(metric);
+            values[i] = st.worst();
+            w.addData(Math.log(eps[i]), Math.log(Math.abs(st.worst())));
+            sd.addData(Math.log(eps[i]), Math.log(Math.sqrt(Math.max(0, st.rms() * st.rms() - st.mean() * st.mean()))));
         }
-        return fit.getSlope();
+        return new Fit(w.getSlope(), sd.getSlope(), values);
     }
 
-    @ParameterizedTest(name = "{0} pitch {1} {2}")
+    private static void record(String field, double pitch, String start, String metric, Fit matched, Fit shared)
+            throws IOException {
+        List<String> cells = new ArrayList<>();
+        for (double v : matched.worstValues()) {
+            cells.add(String.format(Locale.ROOT, "%.2e", v));
+        }
+        String line = String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %.2f | %.2f | %.2f | %.2f |%n", field,
+                Math.round(pitch), start.isEmpty() ? "default" : start.replace(';', ','), metric,
+                String.join(" ", cells), matched.worst(), matched.spread(), shared == null ? Double.NaN : shared.worst(),
+                shared == null ? Double.NaN : shared.spread());
+        Files.createDirectories(TABLE.getParent());
+        Files.writeString(TABLE, line, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+    }
+
+    @ParameterizedTest(name = "{0} pitch {1} {3}")
     @CsvSource({
-            "toroidal, 60, drift_error, false",
-            "toroidal, 30, drift_error, false",
-            "dipole,   60, drift_error, true",
-            "dipole,   60, bounce_period_error, true",
-            "dipole,   40, bounce_period_error, true"})
-    void modelErrorIsSecondOrderWithTheMatchedStartAndFirstOrderWithTheShared(String field, double pitch,
-                                                                              String metric, boolean bounces) {
-        double matched = slope(field, pitch, metric, "matched", bounces);
-        double shared = slope(field, pitch, metric, "shared", bounces);
-        assertTrue(matched >= 1.8, field + " " + metric + " matched-start slope " + matched);
+            "toroidal,      60, '',        drift_error,         false",
+            "toroidal,      30, '',        drift_error,         false",
+            "dipole,        60, '',        drift_error,         true",
+            "dipole,        60, '',        bounce_period_error, true",
+            "dipole,        40, '',        bounce_period_error, true",
+            "mirror,        60, 0.1;0;0,   drift_error,         true",
+            "mirror,        60, 0.1;0;0,   bounce_period_error, true",
+            "mirror,        40, 0.1;0;0,   drift_error,         true",
+            "mirror,        40, 0.1;0;0,   bounce_period_error, true",
+            "current-sheet, 60, '',        bounce_period_error, true",
+            "current-sheet, 30, '',        bounce_period_error, true"})
+    void modelErrorIsSecondOrderWithTheMatchedStartAndFirstOrderWithTheShared(String field, double pitch, String start,
+                                                                              String metric, boolean bounces)
+            throws IOException {
+        Fit matched = fit(field, pitch, start, metric, "matched", bounces);
+        Fit shared = fit(field, pitch, start, metric, "shared", bounces);
+        record(field, pitch, start, metric, matched, shared);
+        assertTrue(matched.worst() >= 1.8, field + " " + metric + " matched-start slope " + matched.worst());
+        assertTrue(matched.spread() >= 1.8, field + " " + metric + " matched-start spread slope " + matched.spread());
         // first order: the start-up offset, not the model
-        assertTrue(shared > 0.7 && shared < 1.3, field + " " + metric + " shared-start slope " + shared);
+        assertTrue(shared.worst() > 0.7 && shared.worst() < 1.3, field + " " + metric + " shared-start slope "
+                + shared.worst());
+        assertTrue(shared.spread() > 0.7 && shared.spread() < 1.3, field + " " + metric + " shared-start spread slope "
+                + shared.spread());
     }
 
     /** In the gradient field the drift is second order either way; the matched start must keep it so. */
     @ParameterizedTest(name = "gradient pitch {0}")
     @CsvSource({"90", "60"})
-    void gradientDriftStaysSecondOrder(double pitch) {
-        double matched = slope("gradient", pitch, "drift_error", "matched", false);
-        assertTrue(matched >= 1.8, "gradient drift matched-start slope " + matched);
+    void gradientDriftStaysSecondOrder(double pitch) throws IOException {
+        Fit matched = fit("gradient", pitch, "", "drift_error", "matched", false);
+        record("gradient", pitch, "", "drift_error", matched, null);
+        assertTrue(matched.worst() >= 1.8, "gradient drift matched-start slope " + matched.worst());
+    }
+
+    /**
+     * In the tokamak a 80° proton is trapped (a banana) only up to ε ≈ 0.02 at the default start,
+     * so the fit runs over ε = 0.005–0.02. There the matched start removes the phase-to-phase
+     * spread at second order, but the phase-mean drift and bounce-period errors stay first order
+     * (about 2e-4 at ε = 0.005): the gyration average of v∥ differs from the guiding center's u∥ by
+     * the Baños term (v⊥²/2Ω) b·∇×b, which vanishes only where field lines do not twist (Baños,
+     * J. Plasma Phys. 1, 1967), and first-order corrections to it were tried and did not give a
+     * clean ε² either. Only the spread is asserted here; the mean is reported as measured.
+     */
+    @ParameterizedTest(name = "tokamak pitch 80 {0}")
+    @CsvSource({"drift_error", "bounce_period_error"})
+    void tokamakSpreadIsSecondOrder(String metric) throws IOException {
+        double[] eps = {0.005, 0.01, 0.02};
+        Fit matched = fit(eps, "tokamak", 80, "", metric, "matched", true);
+        Fit shared = fit(eps, "tokamak", 80, "", metric, "shared", true);
+        record("tokamak", 80, "", metric, matched, shared);
+        assertTrue(matched.spread() >= 1.8, "tokamak " + metric + " matched-start spread slope " + matched.spread());
     }
 }
