@@ -15,11 +15,14 @@ import java.util.Map;
  * <ul>
  * <li>{@code scan}: the settings (field, parameters, species, axis, ε range, ensemble, duration);
  * <li>{@code points}: one object per ε and pitch angle with {@code eps}, {@code energy_ev},
- *     {@code pitch_deg}, for each metric {@code <metric>_mean} and {@code <metric>_worst} over
+ *     {@code pitch_deg}, for each metric {@code <metric>_mean} (phase mean of the signed error),
+ *     {@code <metric>_rms} (rms over phases) and {@code <metric>_worst} (largest magnitude) over
  *     the gyrophase ensemble ({@code mu_jump}, {@code mu_change}, {@code drift_error},
  *     {@code position_error_rho}, {@code bounce_period_error}, {@code class_change}), then
  *     {@code kappa} (current sheets), {@code point_failed} (1 when the particles could not be
- *     placed), {@code lost} (1 when both models lost the particle in every phase, as in a loss cone), {@code full_orbit_reference_error_rho} and
+ *     placed), {@code lost} (1 when both models lost the particle in every phase, as in a loss
+ *     cone), {@code no_bounce} (1 when a bounce-counted point did not bounce and ran one sheet
+ *     crossing or 50 gyroperiods instead), {@code full_orbit_reference_error_rho} and
  *     {@code guiding_center_reference_error_rho} (each reference against itself at a 100×
  *     tighter tolerance), {@code full_orbit_evaluations} and {@code guiding_center_evaluations}
  *     (per orbit), and with {@code --integrators} {@code <integrator>_<metric>_worst} for
@@ -27,7 +30,8 @@ import java.util.Map;
  * <li>{@code thresholds}: one per metric, tolerance and pitch angle with {@code metric},
  *     {@code tolerance}, {@code pitch_deg}, {@code eps_star}, {@code energy_ev_star},
  *     {@code outcome} ({@code crossed}, {@code not-reached}, {@code exceeded-at-start},
- *     {@code no-data}, {@code lost}: every point of that pitch lost by both models, {@code lost-above}: within
+ *     {@code exceeded-once-measured}: not measurable at the smallest eps and beyond tolerance where
+ *     first measured, {@code no-data}, {@code lost}: every point of that pitch lost by both models, {@code lost-above}: within
  *     tolerance wherever the particle stays, lost by both models from eps_star on), plus {@code kappa_star} for current sheets.
  * </ul>
  * A value that was not measured is {@code null}; an orbit that failed makes a worst case

@@ -74,7 +74,9 @@ public final class ScanTables {
                 .append("`inf` marks a point where the guiding ")
                 .append("center failed or the particles could not be placed (`point_failed` = 1); `lost` = 1 marks a point where ")
                 .append("both models lost the particle (a loss cone): it gives no threshold, and a pitch lost at every ")
-                .append("point has the outcome `lost`. ")
+                .append("point has the outcome `lost`. `no_bounce` = 1 marks a point of a bounce-counted scan whose ")
+                .append("guiding center did not bounce: it ran until it had crossed the current sheet once and come back to ")
+                .append("its starting distance, where there is a sheet and the start is off it, else for 50 gyroperiods. ")
                 .append("`*_reference_error_rho` is each reference's self-estimated error (a run at 100 times tighter ")
                 .append("tolerance), `*_evaluations` its field evaluations per orbit.\n\n");
         sb.append("## Thresholds\n\n");

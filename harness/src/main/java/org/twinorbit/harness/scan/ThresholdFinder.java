@@ -14,7 +14,7 @@ public final class ThresholdFinder {
     /**
      * Where an error curve crosses a tolerance.
      *
-     * @param outcome crossed, not reached, exceeded at start, or no data
+     * @param outcome crossed, not reached, exceeded at start, exceeded once measured, or no data
      * @param epsStar ε* for {@link ThresholdOutcome#CROSSED}, NaN otherwise
      */
     public record Crossing(ThresholdOutcome outcome, double epsStar) {}
@@ -52,7 +52,8 @@ public final class ThresholdFinder {
             }
             if (error[i] > tolerance) {
                 if (previous < 0) {
-                    return new Crossing(ThresholdOutcome.EXCEEDED_AT_START, Double.NaN);
+                    return new Crossing(i == 0 ? ThresholdOutcome.EXCEEDED_AT_START
+                            : ThresholdOutcome.EXCEEDED_ONCE_MEASURED, Double.NaN);
                 }
                 return new Crossing(ThresholdOutcome.CROSSED,
                         interpolate(eps[previous], error[previous], eps[i], error[i], tolerance));

@@ -8,6 +8,12 @@ public enum ThresholdOutcome {
     NOT_REACHED("not-reached"),
     /** The error already exceeds the tolerance at the smallest ε scanned; no ε* in range. */
     EXCEEDED_AT_START("exceeded-at-start"),
+    /**
+     * The metric is not measurable at the smallest ε (e.g. a net drift below the measurement
+     * floor) and already exceeds the tolerance at the first ε where it is: no ε* in range, and no
+     * claim about the smaller ε.
+     */
+    EXCEEDED_ONCE_MEASURED("exceeded-once-measured"),
     /** The metric was not measured at any point (it does not apply to these orbits). */
     NO_DATA("no-data"),
     /**
