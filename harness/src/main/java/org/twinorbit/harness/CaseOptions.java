@@ -73,7 +73,7 @@ public final class CaseOptions {
     Double gcStep;
 
     @Option(names = "--gc-start", paramLabel = "START", description = "Start of the model row's guiding centers: "
-            + "matched (default: one per gyrophase, from the reference orbit's first gyration average) or shared "
+            + "matched (default: one per gyrophase, at its reference orbit's first gyration, on its exact invariants) or shared "
             + "(one zeroth-order guiding center for the whole ring).")
     String gcStart;
 

@@ -14,10 +14,12 @@ import java.util.Locale;
 public enum GuidingCenterStart {
     /**
      * The default: each phase gets a guiding center of its own, started at the mid-time of the
-     * full-orbit reference's first whole gyration from that gyration's averages of X, v∥ and μ.
-     * A gyration average centred on a time differs from the true guiding center at that time by
-     * O(ε²) in any field (common practice; Northrop, The Adiabatic Motion of Charged Particles,
-     * 1963), so the comparison measures the model to second order.
+     * full-orbit reference's first whole gyration at that gyration's mean X, with p∥ from the
+     * particle's exact canonical momentum where the field has a symmetry along b (else the
+     * gyration mean of v·b with the Baños correction) and μ from its exact energy in static
+     * magnetic fields (else the gyration mean): within O(ε²) of the particle's true guiding
+     * center, so the comparison measures the model to second order (see the harness's
+     * {@code run.MatchedStart} for the sources).
      */
     MATCHED("matched"),
     /** One guiding center at t = 0 for the whole zeroth-order ring: offsets of O(ε) per phase. */

@@ -81,8 +81,8 @@ public final class ResultTables {
         l.add(String.format(Locale.ROOT, "duration %s; %d gyrophases; full orbit %d steps/Tc; guiding center step %s Tc",
                 dur, c.phases(), c.stepsPerGyro(), Format.number(r.gcStep() / rc.gyroPeriod())));
         l.add(c.gcStart() == org.twinorbit.harness.cases.GuidingCenterStart.MATCHED
-                ? "model row: each gyrophase against its own guiding center, started from the reference orbit's first "
-                        + "gyration average (gc-start matched)"
+                ? "model row: each gyrophase against its own guiding center, started at its reference orbit's first "
+                        + "gyration with that orbit's exact invariants (gc-start matched)"
                 : "model row: every gyrophase against one shared zeroth-order guiding center, offsets O(eps) per phase "
                         + "(gc-start shared)");
         for (ResultRow row : r.rows()) {

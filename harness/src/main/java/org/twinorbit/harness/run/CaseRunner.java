@@ -322,7 +322,7 @@ public final class CaseRunner {
                     foRef[kk] = References.fullOrbit(rc.field(), rc.species(), x0[kk], u0[kk], tEnd, samples,
                             c.referenceRtol(), refStride, deadband);
                     if (matched) {
-                        gcMatched[kk] = matchedGuidingCenter(foRef[kk].gyro(), refStride);
+                        gcMatched[kk] = matchedGuidingCenter(foRef[kk].gyro(), refStride, kk);
                     }
                 }));
                 for (int i = 0; i < np; i++) {
@@ -367,29 +367,19 @@ public final class CaseRunner {
         }
 
         /**
-         * The guiding center of one phase's own orbit: started at the mid-time of the reference's
-         * first whole gyration from that gyration's mean X, v∥ and μ (see {@link GuidingCenterStart}),
-         * with p∥ = γ m ⟨v∥⟩ at the case's γ (exact in static fields without E, where γ is
-         * constant). Null when the orbit completed no gyration (lost at once): the shared start is
-         * used for that phase.
-         *
-         * <p>The guiding center's energy then differs from the particle's at O(ε²) (1e-3 in p²
-         * at ε = 0.1 in the dipole); taking p∥ or μ from the exact energy instead was tried and
-         * measured worse in the toroidal drift (slope 1.4–1.7 instead of 2.0).
+         * The guiding center of one phase's own orbit ({@link MatchedStart}), run from the mid-time
+         * of the reference's first whole gyration to the end. Null when the orbit completed no
+         * gyration (lost at once) or its guiding center lies outside the domain: the shared start
+         * is used for that phase.
          */
-        private GuidingCenterRecord matchedGuidingCenter(GyroAverager g, int stride) {
-            if (g.gyrations() < 1) {
+        private GuidingCenterRecord matchedGuidingCenter(GyroAverager g, int stride, int phase) {
+            MatchedStart.State st = MatchedStart.of(rc.field(), rc.species(), g, x0[phase], u0[phase], rc.gamma(),
+                    rc.momentum());
+            if (st == null || !(st.t0() < tEnd) || !rc.field().inDomain(st.x()[0], st.x()[1], st.x()[2])) {
                 return null;
             }
-            Track centers = g.centers();
-            double t0 = centers.time(0);
-            double[] x = {centers.coord(0, 0), centers.coord(0, 1), centers.coord(0, 2)};
-            if (!(t0 < tEnd) || !rc.field().inDomain(x[0], x[1], x[2])) {
-                return null;
-            }
-            double pPar = rc.gamma() * rc.species().mass() * centers.vParallel(0);
-            long m = Math.max(1, (long) Math.ceil(samples * (tEnd - t0) / tEnd));
-            return References.guidingCenter(rc.field(), rc.species(), t0, g.mu(0), x, pPar, tEnd, m,
+            long m = Math.max(1, (long) Math.ceil(samples * (tEnd - st.t0()) / tEnd));
+            return References.guidingCenter(rc.field(), rc.species(), st.t0(), st.mu(), st.x(), st.pPar(), tEnd, m,
                     c.referenceRtol(), stride, deadband, 0);
         }
 

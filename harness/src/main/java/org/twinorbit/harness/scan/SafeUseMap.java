@@ -145,7 +145,8 @@ public final class SafeUseMap {
         StringBuilder sb = new StringBuilder("# Safe-use map of the guiding-center model\n\n");
         sb.append("eps* is the first eps at which the model error (guiding-center reference against the ")
                 .append("gyro-averaged full-orbit reference, each gyrophase against a guiding center started from ")
-                .append("its own orbit's first gyration average (the matched start), worst phase of the ensemble) exceeds the ")
+                .append("its own orbit's first gyration on that orbit's exact invariants (the matched start), worst phase of ")
+                .append("the ensemble) exceeds the ")
                 .append("default tolerance; below it, and below the energy beside it, guiding centers are safe for ")
                 .append("that metric. `not-reached`: safe over the whole range scanned; `exceeded-at-start`: not safe ")
                 .append("even at the smallest eps scanned; `exceeded-once-measured`: not measurable at the smallest ")

@@ -98,7 +98,7 @@ public final class ScanCommand implements Runnable {
     String statistic = "worst";
 
     @Option(names = "--gc-start", paramLabel = "START", description = "Start of the model's guiding centers: "
-            + "matched (one per gyrophase, from the reference orbit's first gyration average) or shared (one "
+            + "matched (one per gyrophase, at its reference orbit's first gyration, on its exact invariants) or shared (one "
             + "zeroth-order guiding center for the whole ring) (default: ${DEFAULT-VALUE}).")
     String gcStart = "matched";
 

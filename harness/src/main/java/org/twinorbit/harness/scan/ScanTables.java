@@ -68,9 +68,10 @@ public final class ScanTables {
                 .append(shared
                         ? "Start: shared (zeroth order): the whole ring around one guiding center, so each phase "
                                 + "starts with an O(eps) gyrophase-dependent offset that dominates `_worst` and `_rms` of "
-                                + "the drift, bounce and position errors; their `_mean` is the model's error. "
-                        : "Start: matched: each phase is compared with its own guiding center (its first gyration "
-                                + "average), so every statistic measures the model. ")
+                                + "the drift, bounce and position errors; in their `_mean` it cancels at first order over a symmetric ring. "
+                        : "Start: matched: each phase is compared with its own guiding center (started at its first "
+                                + "gyration on the orbit's exact invariants), so every statistic measures the model, to "
+                                + "second order. ")
                 .append("`inf` marks a point where the guiding ")
                 .append("center failed or the particles could not be placed (`point_failed` = 1); `lost` = 1 marks a point where ")
                 .append("both models lost the particle (a loss cone): it gives no threshold, and a pitch lost at every ")

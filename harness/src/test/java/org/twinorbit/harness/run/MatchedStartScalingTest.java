@@ -34,6 +34,14 @@ class MatchedStartScalingTest {
     private static final double[] EPS = {0.005, 0.01, 0.02, 0.05};
     private static final Path TABLE = Path.of("target", "matched-start-scaling.md");
 
+    @org.junit.jupiter.api.BeforeAll
+    static void freshTable() throws IOException {
+        Files.deleteIfExists(TABLE);
+        Files.createDirectories(TABLE.getParent());
+        Files.writeString(TABLE, "| field | pitch | start | metric | matched worst at eps 0.005 0.01 0.02 (0.05) | "
+                + "matched slope | matched spread slope | shared slope | shared spread slope |\n|---|---|---|---|---|---|---|---|---|\n");
+    }
+
     /** Slopes of log |worst| and log spread against log ε. */
     private record Fit(double worst, double spread, double[] worstValues) {}
 
@@ -118,20 +126,20 @@ class MatchedStartScalingTest {
 
     /**
      * In the tokamak a 80° proton is trapped (a banana) only up to ε ≈ 0.02 at the default start,
-     * so the fit runs over ε = 0.005–0.02. There the matched start removes the phase-to-phase
-     * spread at second order, but the phase-mean drift and bounce-period errors stay first order
-     * (about 2e-4 at ε = 0.005): the gyration average of v∥ differs from the guiding center's u∥ by
-     * the Baños term (v⊥²/2Ω) b·∇×b, which vanishes only where field lines do not twist (Baños,
-     * J. Plasma Phys. 1, 1967), and first-order corrections to it were tried and did not give a
-     * clean ε² either. Only the spread is asserted here; the mean is reported as measured.
+     * so the fit runs over ε = 0.005–0.02. Field lines twist there (b·∇×b ≠ 0), which is where a
+     * plain gyration average of v·b and μ is off by O(ε) (the Baños term; Baños, J. Plasma Phys.
+     * 1, 1967): this case fails (slope 1.1) unless p∥ comes from the exact p_φ and μ from the
+     * exact energy, as {@link MatchedStart} does. The shared start is reported, not asserted: in
+     * this short range its slopes lie between 1.2 and 1.8.
      */
     @ParameterizedTest(name = "tokamak pitch 80 {0}")
     @CsvSource({"drift_error", "bounce_period_error"})
-    void tokamakSpreadIsSecondOrder(String metric) throws IOException {
+    void tokamakModelErrorIsSecondOrder(String metric) throws IOException {
         double[] eps = {0.005, 0.01, 0.02};
         Fit matched = fit(eps, "tokamak", 80, "", metric, "matched", true);
         Fit shared = fit(eps, "tokamak", 80, "", metric, "shared", true);
         record("tokamak", 80, "", metric, matched, shared);
+        assertTrue(matched.worst() >= 1.8, "tokamak " + metric + " matched-start slope " + matched.worst());
         assertTrue(matched.spread() >= 1.8, "tokamak " + metric + " matched-start spread slope " + matched.spread());
     }
 }
