@@ -148,9 +148,10 @@ public final class OrbitMetrics {
 
     /**
      * Signed position error per orbit period, in ρ0: |X − X_ref| / ρ0 at the last time t both
-     * tracks reach, divided by the number of slow periods the reference completed by then (whole
-     * bounce periods between its first and last mirror points of the same direction; 1 when it
-     * does not bounce), so that it stays comparable after many bounces. The sign says whether X is
+     * tracks reach, divided by the number of bounce periods the reference has run by then (its
+     * length over the mean spacing of the reference's mirror points of one direction; at least 1,
+     * and 1 when it does not bounce twice the same way), so that it stays comparable after many
+     * bounces. The sign says whether X is
      * ahead (+) or behind (−) the reference along the reference's motion at t.
      *
      * @param rho0 gyroradius (m)
@@ -171,11 +172,10 @@ public final class OrbitMetrics {
             along += (p[i] - q[i]) * (q[i] - q0[i]);
             d2 += (p[i] - q[i]) * (p[i] - q[i]);
         }
+        // the bounce period from the reference's mirror points of one direction; the run's
+        // length in it, at least 1 (a run shorter than a bounce, or one that does not bounce)
         double[] ev = ref.upwardMirrorTimes();
-        int periods = 0;
-        for (int i = 1; i < ev.length; i++) {
-            periods += ev[i] <= t ? 1 : 0;
-        }
+        double periods = ev.length >= 2 ? (t - ref.firstTime()) / ((ev[ev.length - 1] - ev[0]) / (ev.length - 1)) : 1;
         return Math.copySign(Math.sqrt(d2) / rho0 / Math.max(1, periods), along);
     }
 
