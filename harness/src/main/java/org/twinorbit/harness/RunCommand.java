@@ -1,5 +1,9 @@
 package org.twinorbit.harness;
 
+import java.util.List;
+import org.twinorbit.harness.verdict.RowVerdict;
+import org.twinorbit.harness.verdict.VerdictReport;
+import org.twinorbit.harness.verdict.Verdicts;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
@@ -46,6 +50,7 @@ public final class RunCommand implements Callable<Integer> {
             OutputDirectory.prepare(out);
         }
         CaseResult r = new CaseRunner(threads, execution.quiet()).run(c);
+        List<RowVerdict> verdicts = Verdicts.judge(r);
         PrintWriter pw = spec.commandLine().getOut();
         if (json) {
             pw.print(ResultJson.write(ResultJson.document(r)));
@@ -55,6 +60,10 @@ public final class RunCommand implements Callable<Integer> {
             }
             pw.println();
             pw.print(ResultTables.table(r, null).aligned());
+            pw.println();
+            for (String line : VerdictReport.lines(verdicts)) {
+                pw.println(line);
+            }
         }
         if (out != null) {
             RunReport.write(r, out);
@@ -64,6 +73,6 @@ public final class RunCommand implements Callable<Integer> {
             }
         }
         pw.flush();
-        return 0;
+        return VerdictReport.exitCode(verdicts);
     }
 }

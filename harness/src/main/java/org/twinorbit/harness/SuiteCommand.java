@@ -1,5 +1,10 @@
 package org.twinorbit.harness;
 
+import org.twinorbit.harness.run.Registry;
+import org.twinorbit.harness.verdict.Expectation;
+import org.twinorbit.harness.verdict.RowVerdict;
+import org.twinorbit.harness.verdict.VerdictReport;
+import org.twinorbit.harness.verdict.Verdicts;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
@@ -34,6 +39,10 @@ public final class SuiteCommand implements Callable<Integer> {
     @Option(names = "--no-safe-use", description = "Skip the safe-use map (about 50 s of the full suite's time).")
     boolean noSafeUse;
 
+    @Option(names = "--pushers", paramLabel = "NAMES", split = ",", description = "Full-orbit pushers of every "
+            + "case, comma-separated (default: all registered, your own on the class path included).")
+    List<String> pushers;
+
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "results",
             description = "Directory of the report (default: ${DEFAULT-VALUE}).")
     Path out;
@@ -48,7 +57,7 @@ public final class SuiteCommand implements Callable<Integer> {
     public Integer call() {
         int threads = execution.threads();
         OutputDirectory.prepare(out);
-        List<Case> cases = ValidationSuite.cases(quick);
+        List<Case> cases = ValidationSuite.cases(quick, pushers == null ? Registry.pusherNames() : checked(pushers));
         long t0 = System.nanoTime();
         List<CaseResult> results = new CaseRunner(threads, execution.quiet()).run(cases);
         ValidationReport.write(results, quick, out, threads);
@@ -58,11 +67,30 @@ public final class SuiteCommand implements Callable<Integer> {
         pw.println();
         pw.printf(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads; wrote %s, validation.csv, validation.json and plots/%n",
                 cases.size(), seconds, threads, out.resolve("validation.md"));
+        List<RowVerdict> verdicts = new java.util.ArrayList<>();
+        for (CaseResult r : results) {
+            verdicts.addAll(Verdicts.judge(r));
+        }
+        verdicts = Expectation.apply(verdicts, ValidationSuite.expectations());
+        for (String line : VerdictReport.lines(verdicts)) {
+            pw.println(line);
+        }
         pw.flush();
         if (!quick && !noSafeUse) {
             writeSafeUseMap(pw, threads);
         }
-        return 0;
+        return VerdictReport.exitCode(verdicts);
+    }
+
+    /** The names, each checked against the registry. @throws IllegalArgumentException naming --pushers */
+    private static List<String> checked(List<String> names) {
+        for (String n : names) {
+            if (!Registry.pusherNames().contains(n)) {
+                throw new IllegalArgumentException("--pushers: unknown pusher '" + n + "'; allowed: "
+                        + String.join(", ", Registry.pusherNames()));
+            }
+        }
+        return List.copyOf(names);
     }
 
     /** The breakdown threshold eps* of every field, metric and species at the default tolerances. */

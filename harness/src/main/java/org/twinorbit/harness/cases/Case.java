@@ -45,6 +45,13 @@ public record Case(String name, String field, Map<String, Double> fieldParameter
                 duration, durationUnit, pushers, stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol, gcStart);
     }
 
+    /** Copy with other full-orbit pushers (names as in {@code --pushers}). */
+    public Case withPushers(List<String> names) {
+        return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, phases,
+                duration, durationUnit, List.copyOf(names), stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol,
+                gcStart);
+    }
+
     /** Copy with another start of the model row's guiding centers. */
     public Case withGcStart(GuidingCenterStart g) {
         return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, phases,

@@ -28,6 +28,10 @@ public final class EnergyMonitor implements FullOrbitObserver {
     private double k0;
     private double maxError;
     private double blowUpTime = Double.NaN;
+    /** Time (s) dividing the run into the halves whose largest errors are compared; NaN: no split. */
+    private double split = Double.NaN;
+    private double maxFirstHalf;
+    private double maxSecondHalf;
 
     /** @param stride keep one point in this many for the plotted series */
     public EnergyMonitor(Field field, Species species, int stride) {
@@ -54,6 +58,11 @@ public final class EnergyMonitor implements FullOrbitObserver {
         if (err > maxError || Double.isNaN(err)) {
             maxError = err;
         }
+        if (t <= split) {
+            maxFirstHalf = Math.max(maxFirstHalf, err);
+        } else if (t > split) {
+            maxSecondHalf = Math.max(maxSecondHalf, err);
+        }
         if (!(err <= BLOW_UP) && Double.isNaN(blowUpTime)) {
             blowUpTime = t;
         }
@@ -62,6 +71,21 @@ public final class EnergyMonitor implements FullOrbitObserver {
     /** max |W − W0|/K0, NaN where energy is not conserved by the field. */
     public double maxError() {
         return defined && started ? maxError : Double.NaN;
+    }
+
+    /** Splits the run at time t (s), the middle of the planned run, for {@link #halves()}. */
+    public void splitAt(double t) {
+        split = t;
+    }
+
+    /**
+     * The largest |W − W0|/K0 before and after the split time: a bounded error has about the same
+     * in both halves, a secular one (linear growth) about twice as much in the second. NaN where
+     * the energy is not conserved by the field or no split was set.
+     */
+    public double[] halves() {
+        return defined && started && !Double.isNaN(split) ? new double[] {maxFirstHalf, maxSecondHalf}
+                : new double[] {Double.NaN, Double.NaN};
     }
 
     /** True once the energy error passed {@link #BLOW_UP} (or became NaN). */

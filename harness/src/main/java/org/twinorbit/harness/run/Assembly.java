@@ -12,6 +12,7 @@ import org.twinorbit.harness.metrics.GyroAverager;
 import org.twinorbit.harness.metrics.MuJump;
 import org.twinorbit.harness.metrics.OrbitMetrics;
 import org.twinorbit.harness.metrics.OrbitMetrics.OrbitClass;
+import org.twinorbit.harness.metrics.Runaway;
 import org.twinorbit.harness.metrics.Track;
 
 /** Turns the records of a finished {@link CaseRunner.Plan} into rows, in a fixed order. */
@@ -67,6 +68,8 @@ final class Assembly {
             OrbitStatus[] st = new OrbitStatus[nph];
             double[] ends = new double[nph];
             MuJump.From[] muFrom = new MuJump.From[nph];
+            double runaway = Double.NaN;
+            double[] halves = {Double.NaN, Double.NaN};
             double steps = 0, evals = 0, wall = 0;
             for (int k = 0; k < nph; k++) {
                 FullOrbitRecord r = p.fo[i][k];
@@ -79,6 +82,12 @@ final class Assembly {
                 m.get("mu_jump")[k] = jump.value();
                 muFrom[k] = jump.from();
                 m.get("energy_error")[k] = r.energy().maxError();
+                runaway = worse(runaway, Runaway.fullOrbit(g, ref.gyro(), p.speed));
+                double[] h = r.energy().halves();
+                if (h[1] / Math.max(h[0], Double.MIN_NORMAL) > halves[1] / Math.max(halves[0], Double.MIN_NORMAL)
+                        || Double.isNaN(halves[1])) {
+                    halves = h;
+                }
                 m.get("phase_error")[k] = OrbitMetrics.phaseError(g, ref.gyro());
                 double[] w = OrbitMetrics.window(refTr);
                 m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
@@ -95,16 +104,19 @@ final class Assembly {
                 evals += r.outcome().fieldEvaluations();
                 wall += r.outcome().wallNanos();
             }
-            double[] dts = {p.dt, p.dt / 2, p.dt / 4};
-            double[] errs = new double[3];
+            int levels = CaseRunner.CONVERGENCE_LEVELS;
+            double[] dts = new double[levels];
+            double[] errs = new double[levels];
             FullOrbitRecord[] runs = p.foConv[i];
-            for (int l = 0; l < 3; l++) {
+            for (int l = 0; l < levels; l++) {
+                dts[l] = p.dt / (1 << l);
                 errs[l] = runs[l].outcome().status() == OrbitStatus.OK && p.convRef.outcome().status() == OrbitStatus.OK
                         ? distance(runs[l].finalX(), p.convRef.finalX()) / rho : Double.NaN;
                 wall += runs[l].outcome().wallNanos();
             }
             rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, muFrom, inv, cls, refCls,
-                    order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall));
+                    order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall,
+                    new Diagnostics(runaway, halves[0], halves[1], localOrders(dts, errs, convSelf))));
         }
 
         // guiding-center rows: the ensemble shares one guiding center, so one run stands for all phases
@@ -124,10 +136,14 @@ final class Assembly {
             OrbitClass[] cls = {OrbitMetrics.classify(st[0], tr)};
             OrbitClass[] refCls = {OrbitMetrics.classify(ref.outcome().status(), refTr)};
             double wall = r.outcome().wallNanos();
-            double[] dts = {p.gcDt, p.gcDt / 2, p.gcDt / 4};
-            double[] errs = new double[3];
-            GuidingCenterRecord[] runs = {r, p.gcConv[gi][0], p.gcConv[gi][1]};
-            for (int l = 0; l < 3; l++) {
+            int levels = CaseRunner.CONVERGENCE_LEVELS;
+            double[] dts = new double[levels];
+            double[] errs = new double[levels];
+            GuidingCenterRecord[] runs = new GuidingCenterRecord[levels];
+            runs[0] = r;
+            System.arraycopy(p.gcConv[gi], 0, runs, 1, levels - 1);
+            for (int l = 0; l < levels; l++) {
+                dts[l] = p.gcDt / (1 << l);
                 errs[l] = runs[l].outcome().status() == OrbitStatus.OK && ref.outcome().status() == OrbitStatus.OK
                         ? distance(runs[l].finalX(), ref.finalX()) / rho : Double.NaN;
                 wall += l > 0 ? runs[l].outcome().wallNanos() : 0;
@@ -135,7 +151,8 @@ final class Assembly {
             rows.add(row(p.gcs.get(gi).name(), "guiding-center", "discretisation", st, ends, m, new MuJump.From[0],
                     new LinkedHashMap<>(),
                     cls, refCls, order(dts, errs, gcSelf), dts, errs, r.outcome().steps(),
-                    r.outcome().fieldEvaluations(), wall));
+                    r.outcome().fieldEvaluations(), wall, new Diagnostics(Runaway.guidingCenter(tr, refTr, p.speed),
+                            Double.NaN, Double.NaN, localOrders(dts, errs, gcSelf))));
         }
 
         // model error: guiding-center reference against the gyro-averaged full-orbit reference
@@ -173,7 +190,7 @@ final class Assembly {
             GuidingCenterRecord r = p.gcRef;
             ResultRow model = row("gc-reference", "guiding-center", "model", st, ends, m, muFrom, new LinkedHashMap<>(), cls,
                     refCls, Double.NaN, new double[0], new double[0], r.outcome().steps(),
-                    r.outcome().fieldEvaluations(), r.outcome().wallNanos());
+                    r.outcome().fieldEvaluations(), r.outcome().wallNanos(), Diagnostics.NONE);
             rows.add(withModelStatus(model, labels, ends));
         }
 
@@ -232,6 +249,11 @@ final class Assembly {
                 OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb, coarse), floor);
     }
 
+    /** The larger of two strays; NaN (not measured) counts as none. */
+    private static double worse(double a, double b) {
+        return Double.isNaN(b) ? a : Double.isNaN(a) ? b : Math.max(a, b);
+    }
+
     private static Map<String, double[]> newMetrics(int nph) {
         Map<String, double[]> m = new LinkedHashMap<>();
         for (String name : ResultRow.METRICS) {
@@ -255,7 +277,7 @@ final class Assembly {
                                  Map<String, double[]> m, MuJump.From[] muFrom, Map<String, double[]> inv,
                                  OrbitClass[] cls,
                                  OrbitClass[] refCls, double order, double[] dts, double[] errs,
-                                 double steps, double evals, double wallNanos) {
+                                 double steps, double evals, double wallNanos, Diagnostics diagnostics) {
         OrbitStatus worst = OrbitStatus.OK;
         for (OrbitStatus s : st) {
             if (severity(s) > severity(worst)) {
@@ -289,7 +311,7 @@ final class Assembly {
         }
         return new ResultRow(name, model, kind, worst.label(), when, metrics, invariants, classes,
                 (double) agree / cls.length, order, dts, errs, steps < 0 ? Double.NaN : steps, evals, wallNanos * 1e-9,
-                from.isEmpty() ? null : String.join("/", from.stream().map(MuJump.From::label).toList()));
+                from.isEmpty() ? null : String.join("/", from.stream().map(MuJump.From::label).toList()), diagnostics);
     }
 
     /** Model-row statuses from the least to the most severe. */
@@ -332,7 +354,7 @@ final class Assembly {
         }
         return new ResultRow(r.integrator(), r.model(), r.errorKind(), worst, when, r.metrics(), r.invariants(),
                 r.orbitClass(), r.classAgreement(), r.order(), r.convergenceDt(), r.convergenceError(), r.steps(),
-                r.fieldEvaluations(), r.wallSeconds(), r.muJumpFrom());
+                r.fieldEvaluations(), r.wallSeconds(), r.muJumpFrom(), r.diagnostics());
     }
 
     private static int severity(OrbitStatus s) {
@@ -344,19 +366,57 @@ final class Assembly {
         };
     }
 
+    /** Fewest convergence points that give an order: three, so that two local orders can agree. */
+    static final int MIN_ORDER_POINTS = 3;
+
     /**
-     * Least-squares slope of log(error) against log(dt); NaN when a run failed or an error is
-     * within {@link #REFERENCE_MARGIN} of the reference's own error or below {@link #ROUND_OFF_FLOOR}.
+     * The indices of the convergence points that measure truncation error: from the first valid
+     * point on, while the runs succeeded and the errors stay above {@link #REFERENCE_MARGIN}
+     * times the reference's own error and above {@link #ROUND_OFF_FLOOR}.
+     */
+    static int[] usable(double[] errs, double referenceError) {
+        int[] idx = new int[errs.length];
+        int n = 0;
+        for (int l = 0; l < errs.length; l++) {
+            boolean ok = Double.isFinite(errs[l]) && errs[l] > Math.max(REFERENCE_MARGIN * referenceError, ROUND_OFF_FLOOR);
+            if (ok) {
+                idx[n++] = l;
+            } else if (n > 0) {
+                break;
+            }
+        }
+        return java.util.Arrays.copyOf(idx, n);
+    }
+
+    /**
+     * Least-squares slope of log(error) against log(dt) over the {@link #usable} points; NaN
+     * with fewer than {@link #MIN_ORDER_POINTS}.
      */
     static double order(double[] dts, double[] errs, double referenceError) {
+        int[] use = usable(errs, referenceError);
+        if (use.length < MIN_ORDER_POINTS) {
+            return Double.NaN;
+        }
         SimpleRegression reg = new SimpleRegression();
-        for (int l = 0; l < dts.length; l++) {
-            if (!(errs[l] > Math.max(REFERENCE_MARGIN * referenceError, ROUND_OFF_FLOOR)) || !Double.isFinite(errs[l])) {
-                return Double.NaN;
-            }
+        for (int l : use) {
             reg.addData(Math.log(dts[l]), Math.log(errs[l]));
         }
         return reg.getSlope();
+    }
+
+    /** Orders between successive usable points, empty with fewer than {@link #MIN_ORDER_POINTS}. */
+    static double[] localOrders(double[] dts, double[] errs, double referenceError) {
+        int[] use = usable(errs, referenceError);
+        if (use.length < MIN_ORDER_POINTS) {
+            return new double[0];
+        }
+        double[] out = new double[use.length - 1];
+        for (int i = 0; i + 1 < use.length; i++) {
+            int a = use[i];
+            int b = use[i + 1];
+            out[i] = Math.log(errs[a] / errs[b]) / Math.log(dts[a] / dts[b]);
+        }
+        return out;
     }
 
     /**

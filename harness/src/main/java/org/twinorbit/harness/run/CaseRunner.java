@@ -52,6 +52,11 @@ public final class CaseRunner {
      * where halving dt divides it by 2^order.
      */
     static final double CONVERGENCE_GYRO = 4;
+    /**
+     * Steps of every convergence sweep: dt, dt/2, dt/4, dt/8. Four points give three local
+     * orders, whose agreement shows that the sweep lies in the asymptotic regime.
+     */
+    static final int CONVERGENCE_LEVELS = 4;
     /** Estimated cost of one full-orbit reference sample, in pusher steps (for job ordering only). */
     static final double FO_REFERENCE_SAMPLE = 11;
     /** Estimated cost of one guiding-center reference sample, in pusher steps. */
@@ -303,12 +308,12 @@ public final class CaseRunner {
             int ng = gcs.size();
             int nph = x0.length;
             fo = new FullOrbitRecord[np][nph];
-            foConv = new FullOrbitRecord[np][3];
+            foConv = new FullOrbitRecord[np][CONVERGENCE_LEVELS];
             foRef = new FullOrbitRecord[nph];
             gcMatched = new GuidingCenterRecord[nph];
             boolean matched = c.gcStart() == GuidingCenterStart.MATCHED;
             gc = new GuidingCenterRecord[ng];
-            gcConv = new GuidingCenterRecord[ng][2];
+            gcConv = new GuidingCenterRecord[ng][CONVERGENCE_LEVELS - 1];
             int stride = (int) Math.max(1, n / PLOT_POINTS);
             int refStride = (int) Math.max(1, samples / PLOT_POINTS);
             int gcStride = (int) Math.max(1, gcN / PLOT_POINTS);
@@ -354,7 +359,7 @@ public final class CaseRunner {
                     rc.species(), x0[0], u0[0], convN * dt, convSamples, References.tighter(c.referenceRtol()), 1,
                     deadband)));
             for (int i = 0; i < np; i++) {
-                for (int level = 0; level < 3; level++) {
+                for (int level = 0; level < CONVERGENCE_LEVELS; level++) {
                     int ii = i;
                     int ll = level;
                     long m = convN << level;
@@ -385,7 +390,7 @@ public final class CaseRunner {
 
         private void addGuidingCenterConvergence(List<Parallel.Job> jobs, int ng) {
             for (int g = 0; g < ng; g++) {
-                for (int level = 0; level < 2; level++) {
+                for (int level = 0; level < CONVERGENCE_LEVELS - 1; level++) {
                     int gg = g;
                     int ll = level;
                     long m = gcN << (level + 1);

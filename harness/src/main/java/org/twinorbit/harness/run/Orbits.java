@@ -59,6 +59,7 @@ public final class Orbits {
                                        double dt, long n, int stride, double deadband) {
         long t0 = System.nanoTime();
         FullOrbitWatch watch = new FullOrbitWatch(field, s, stride, deadband);
+        watch.energy.splitAt(0.5 * n * dt);
         FullOrbitStepper st = pusher.stepper(field, s, dt);
         st.start(0.0, x0.clone(), u0.clone());
         double[] x = new double[3];

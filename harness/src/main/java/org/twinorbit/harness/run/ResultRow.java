@@ -27,11 +27,13 @@ import java.util.Map;
  * @param wallSeconds      wall time summed over the ensemble (s); never in JSON or CSV
  * @param muJumpFrom       the points {@code mu_jump} compared ({@link org.twinorbit.harness.metrics.MuJump.From}
  *                         labels, '/'-joined when phases differ); empty for a row without μ
+ * @param diagnostics      the facts its verdicts are read from
  */
 public record ResultRow(String integrator, String model, String errorKind, String status, double statusTime,
                         Map<String, Stat> metrics, Map<String, Stat> invariants, String orbitClass,
                         double classAgreement, double order, double[] convergenceDt, double[] convergenceError,
-                        double steps, double fieldEvaluations, double wallSeconds, String muJumpFrom) {
+                        double steps, double fieldEvaluations, double wallSeconds, String muJumpFrom,
+                        Diagnostics diagnostics) {
 
     /** Metric names in report order (the JSON and CSV field names). */
     public static final java.util.List<String> METRICS = java.util.List.of("mu_change", "mu_jump", "energy_error",

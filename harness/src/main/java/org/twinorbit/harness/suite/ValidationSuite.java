@@ -7,6 +7,8 @@ import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.DurationUnit;
 import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.run.Registry;
+import org.twinorbit.harness.verdict.Check;
+import org.twinorbit.harness.verdict.Expectation;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
@@ -25,8 +27,33 @@ public final class ValidationSuite {
 
     private ValidationSuite() {}
 
-    /** The cases, in report order (grouped by field, in library order). */
+    /** The cases with every registered pusher, in report order (grouped by field, in library order). */
     public static List<Case> cases(boolean quick) {
+        return cases(quick, Registry.pusherNames());
+    }
+
+    /** The cases with the given full-orbit pushers. */
+    public static List<Case> cases(boolean quick, List<String> pushers) {
+        return all(quick).stream().map(c -> c.withPushers(pushers)).toList();
+    }
+
+    /**
+     * The failures that are the point of a case: reported as expected, and reported as failures
+     * when they stop happening.
+     */
+    public static List<Expectation> expectations() {
+        return EXPECTED;
+    }
+
+    private static final String RK4_DIPOLE = "RK4 is not time-reversible: over two bounces at 30 degrees in the "
+            + "dipole its energy error grows until the orbit leaves the reference's";
+    private static final List<Expectation> EXPECTED = List.of(
+            new Expectation("dipole-proton-eps0.05", "rk4", Check.STABLE, RK4_DIPOLE),
+            new Expectation("dipole-proton-eps0.05", "rk4", Check.RUNAWAY, RK4_DIPOLE),
+            new Expectation("dipole-proton-eps0.05-shared", "rk4", Check.STABLE, RK4_DIPOLE),
+            new Expectation("dipole-proton-eps0.05-shared", "rk4", Check.RUNAWAY, RK4_DIPOLE));
+
+    private static List<Case> all(boolean quick) {
         List<Case> l = new ArrayList<>();
         Species p = Species.PROTON;
         Species e = Species.ELECTRON;

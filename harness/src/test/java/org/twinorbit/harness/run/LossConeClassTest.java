@@ -44,6 +44,6 @@ class LossConeClassTest {
 
     private static ResultRow row(String status, String cls, double agreement) {
         return new ResultRow("boris", "full-orbit", "discretisation", status, Double.NaN, Map.of(), Map.of(), cls,
-                agreement, Double.NaN, new double[0], new double[0], 1, 1, 0, "");
+                agreement, Double.NaN, new double[0], new double[0], 1, 1, 0, "", Diagnostics.NONE);
     }
 }

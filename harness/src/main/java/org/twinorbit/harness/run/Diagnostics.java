@@ -1,0 +1,20 @@
+package org.twinorbit.harness.run;
+
+/**
+ * The facts a row's verdicts are read from ({@link org.twinorbit.harness.verdict.Verdicts}),
+ * beside its metrics.
+ *
+ * @param runaway          largest stray from the reference along the run over the ensemble
+ *                         ({@link org.twinorbit.harness.metrics.Runaway}); NaN when not measured
+ * @param energyFirstHalf  largest |W − W0|/K0 in the first half of the run, in the phase whose
+ *                         second half grew most; NaN where the energy is not conserved
+ * @param energySecondHalf the same phase's largest error in the second half
+ * @param localOrders      orders between successive steps of the convergence sweep, over the
+ *                         points that are neither reference- nor round-off-limited; empty when
+ *                         fewer than three such points
+ */
+public record Diagnostics(double runaway, double energyFirstHalf, double energySecondHalf, double[] localOrders) {
+
+    /** No facts (the model row). */
+    public static final Diagnostics NONE = new Diagnostics(Double.NaN, Double.NaN, Double.NaN, new double[0]);
+}
