@@ -142,7 +142,7 @@ public final class ResultTables {
                 c.add(n(row.metric(m).rms()));
                 c.add(n(row.metric(m).worst()));
             }
-            c.addAll(List.of(n(worstInvariant(row)), n(row.order()), n(row.steps()), n(row.fieldEvaluations())));
+            c.addAll(List.of(n(worstInvariant(row)), n(row.order()), count(row.steps()), count(row.fieldEvaluations())));
             sb.append(String.join(",", c)).append('\n');
         }
         return sb.toString();
@@ -150,6 +150,12 @@ public final class ResultTables {
 
     private static String n(double v) {
         return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+
+    /** A count as an integer (a mean over the ensemble rounded, as in the JSON); empty when not counted. */
+    private static String count(double v) {
+        Long c = ResultJson.count(v);
+        return c == null ? "" : c.toString();
     }
 
     private static String csv(String s) {
