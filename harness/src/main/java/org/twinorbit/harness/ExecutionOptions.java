@@ -9,7 +9,8 @@ public final class ExecutionOptions {
             description = "Worker threads (default: all available cores); the results do not depend on it.")
     Integer threads;
 
-    @Option(names = {"-q", "--quiet"}, description = "No progress bar on stderr.")
+    @Option(names = {"-q", "--quiet"}, description = "No progress bar on stderr (there is none anyway when stderr "
+            + "is not a terminal).")
     boolean quiet;
 
     /** The thread count, all cores by default. @throws IllegalArgumentException below 1 */
@@ -21,7 +22,11 @@ public final class ExecutionOptions {
         return t;
     }
 
+    /**
+     * True for {@code --quiet}, and whenever stderr is not a terminal: the progress bars redraw
+     * with escape sequences, which must not end up in a redirected file ({@link Terminal}).
+     */
     public boolean quiet() {
-        return quiet;
+        return quiet || !Terminal.isTerminal(Terminal.STDERR);
     }
 }

@@ -1,7 +1,5 @@
 package org.twinorbit.harness;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -11,6 +9,8 @@ import org.twinorbit.fields.Field;
 import org.twinorbit.fields.FieldProvider;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.fields.ParameterSpec;
+import org.twinorbit.harness.report.ResultJson;
+import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.shared.Species;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -23,6 +23,7 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "that defines eps = rho/L, and the invariants of the motion.")
 public final class FieldsCommand implements Runnable {
 
+    /** JSON: {@code tool} ({@link ToolInfo}), then {@code fields}: name, description, parameters, length_meaning, l_m, ... */
     @Option(names = "--json", description = "Print the listing as JSON.")
     boolean json;
 
@@ -37,12 +38,9 @@ public final class FieldsCommand implements Runnable {
             rows.add(describe(p));
         }
         if (json) {
-            try {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
-                        .writeValueAsString(Map.of("fields", rows)));
-            } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("fields", rows);
+            out.print(ResultJson.write(ToolInfo.stamped(doc)));
         } else {
             for (Map<String, Object> r : rows) {
                 printText(out, r);
@@ -69,7 +67,7 @@ public final class FieldsCommand implements Runnable {
         r.put("parameters", params);
         Field f = Fields.create(p.name(), Species.PROTON);
         r.put("length_meaning", p.lengthMeaning());
-        r.put("L_m", Double.isFinite(f.length()) ? f.length() : null);
+        r.put("l_m", Double.isFinite(f.length()) ? f.length() : null);
         if (!f.isStatic()) {
             r.put("time_scale_s_for_proton", f.timeScale());
         }
@@ -85,7 +83,7 @@ public final class FieldsCommand implements Runnable {
             out.printf("    %-12s = %-10s %-8s %s (%s)%n", m.get("name"), Format.number((double) m.get("default")),
                     m.get("unit"), m.get("description"), m.get("allowed"));
         }
-        Object l = r.get("L_m");
+        Object l = r.get("l_m");
         out.printf("    L: %s%s%n", r.get("length_meaning"), l == null ? "" : " = " + Format.number((double) l) + " m");
         if (r.containsKey("time_scale_s_for_proton")) {
             out.printf("    time scale for a proton: %s s%n", Format.number((double) r.get("time_scale_s_for_proton")));

@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.twinorbit.harness.report.ResultJson;
+import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.harness.run.References;
 import org.twinorbit.harness.run.Registry;
 import picocli.CommandLine.Command;
@@ -45,7 +46,7 @@ public final class IntegratorsCommand implements Runnable {
             refs.put("full_orbit", References.fullOrbitMethod());
             refs.put("guiding_center", References.guidingCenterMethod());
             doc.put("references", refs);
-            out.print(ResultJson.write(doc));
+            out.print(ResultJson.write(ToolInfo.stamped(doc)));
         } else {
             org.twinorbit.harness.report.TextTable t = new org.twinorbit.harness.report.TextTable(
                     List.of("name", "model", "order", "properties"));

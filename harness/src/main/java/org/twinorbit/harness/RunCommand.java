@@ -12,6 +12,7 @@ import org.twinorbit.harness.cases.ResolvedCase;
 import org.twinorbit.harness.report.ResultJson;
 import org.twinorbit.harness.report.ResultTables;
 import org.twinorbit.harness.report.RunReport;
+import org.twinorbit.harness.report.Timings;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.CaseRunner;
 import picocli.CommandLine.Command;
@@ -20,7 +21,11 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code twinorbit run}: one case, every chosen integrator, a metrics table. */
+/**
+ * {@code twinorbit run}: one case, every chosen integrator, a metrics table. The table on the
+ * terminal ends with a wall-time column; run.md, run.csv and run.json have none (they must not
+ * depend on the machine), and with {@code --out} the wall times go to {@link Timings#FILE_NAME}.
+ */
 @Command(name = "run", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Run one case: every chosen full-orbit pusher and guiding-center integrator and both references "
                 + "on a gyrophase ensemble; print the errors, discretisation and model error in separate rows.")
@@ -49,8 +54,11 @@ public final class RunCommand implements Callable<Integer> {
         if (out != null) {
             OutputDirectory.prepare(out);
         }
+        long t0 = System.nanoTime();
         CaseResult r = new CaseRunner(threads, execution.quiet()).run(c);
         List<RowVerdict> verdicts = Verdicts.judge(r);
+        String total = String.format(java.util.Locale.ROOT, "%s in %.1f s on %d threads", r.resolved().spec().name(),
+                (System.nanoTime() - t0) * 1e-9, threads);
         PrintWriter pw = spec.commandLine().getOut();
         if (json) {
             pw.print(ResultJson.write(ResultJson.document(r)));
@@ -59,7 +67,7 @@ public final class RunCommand implements Callable<Integer> {
                 pw.println(line);
             }
             pw.println();
-            pw.print(ResultTables.table(r, null).aligned());
+            pw.print(ResultTables.tableWithWallTime(r).aligned());
             pw.println();
             for (String line : VerdictReport.lines(verdicts)) {
                 pw.println(line);
@@ -67,9 +75,11 @@ public final class RunCommand implements Callable<Integer> {
         }
         if (out != null) {
             RunReport.write(r, out);
+            new Timings("twinorbit run").total(total).cases(java.util.List.of(r)).write(out);
             if (!json) {
                 pw.println();
-                pw.println("wrote " + out.resolve("run.md") + ", run.csv, run.json and plots");
+                pw.println("wrote " + out.resolve("run.md") + ", run.csv, run.json and plots; wall times in "
+                        + Timings.FILE_NAME);
             }
         }
         pw.flush();

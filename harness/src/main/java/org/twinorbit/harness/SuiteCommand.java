@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.run.CaseResult;
+import org.twinorbit.harness.report.Timings;
 import org.twinorbit.harness.run.CaseRunner;
 import org.twinorbit.harness.scan.SafeUseMap;
 import org.twinorbit.harness.scan.ScanProgress;
@@ -23,11 +24,16 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code twinorbit suite}: the built-in validation suite into tables and plots. */
+/**
+ * {@code twinorbit suite}: the built-in validation suite into tables and plots. The files it
+ * writes have no wall-clock times, so that regenerating them with an unchanged tool gives the
+ * same bytes; the times go to the terminal and to {@link Timings#FILE_NAME} beside them.
+ */
 @Command(name = "suite", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Run the built-in validation suite (every field of the library with its cases, every integrator) "
                 + "and write validation.md, validation.csv, validation.json and PNG plots; the full suite also "
-                + "writes the safe-use map (eps* per field, metric and species: safe-use.md, .csv, .json, .png).",
+                + "writes the safe-use map (eps* per field, metric and species: safe-use.md, .csv, .json, .png). "
+                + "Wall-clock times go to timings.md only, so that the other files do not change between runs.",
         footer = {"", "The suite is short enough that the JIT's optimising compiler costs more CPU than it saves:",
             "java -XX:TieredStopAtLevel=1 -jar twinorbit.jar suite runs it about twice as fast, with identical results."})
 public final class SuiteCommand implements Callable<Integer> {
@@ -65,8 +71,9 @@ public final class SuiteCommand implements Callable<Integer> {
         PrintWriter pw = spec.commandLine().getOut();
         pw.print(ValidationReport.overview(results).aligned());
         pw.println();
-        pw.printf(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads; wrote %s, validation.csv, validation.json and plots/%n",
-                cases.size(), seconds, threads, out.resolve("validation.md"));
+        String total = String.format(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads", cases.size(), seconds,
+                threads);
+        pw.printf("%s; wrote %s, validation.csv, validation.json and plots/%n", total, out.resolve("validation.md"));
         List<RowVerdict> verdicts = new java.util.ArrayList<>();
         for (CaseResult r : results) {
             verdicts.addAll(Verdicts.judge(r));
@@ -76,9 +83,13 @@ public final class SuiteCommand implements Callable<Integer> {
             pw.println(line);
         }
         pw.flush();
+        Timings timings = new Timings("twinorbit suite" + (quick ? " --quick" : "")).total(total).cases(results);
         if (!quick && !noSafeUse) {
-            writeSafeUseMap(pw, threads);
+            timings.total(writeSafeUseMap(pw, threads));
         }
+        timings.write(out);
+        pw.printf("wall times in %s%n", out.resolve(Timings.FILE_NAME));
+        pw.flush();
         return VerdictReport.exitCode(verdicts);
     }
 
@@ -93,8 +104,11 @@ public final class SuiteCommand implements Callable<Integer> {
         return List.copyOf(names);
     }
 
-    /** The breakdown threshold eps* of every field, metric and species at the default tolerances. */
-    private void writeSafeUseMap(PrintWriter pw, int threads) {
+    /**
+     * The breakdown threshold eps* of every field, metric and species at the default tolerances.
+     * @return the line of totals for the timings
+     */
+    private String writeSafeUseMap(PrintWriter pw, int threads) {
         long t0 = System.nanoTime();
         SafeUseMap.Result r;
         if (execution.quiet()) {
@@ -104,8 +118,10 @@ public final class SuiteCommand implements Callable<Integer> {
                 r = SafeUseMap.run(out, SafeUseMap.Resolution.FULL, false, threads, bar);
             }
         }
-        pw.printf(java.util.Locale.ROOT, "safe-use map: %d rows in %.1f s; wrote %s, safe-use.csv, safe-use.json, safe-use.png%n",
-                r.rows().size(), (System.nanoTime() - t0) * 1e-9, out.resolve("safe-use.md"));
+        String total = String.format(java.util.Locale.ROOT, "safe-use map: %d rows in %.1f s", r.rows().size(),
+                (System.nanoTime() - t0) * 1e-9);
+        pw.printf("%s; wrote %s, safe-use.csv, safe-use.json, safe-use.png%n", total, out.resolve("safe-use.md"));
         pw.flush();
+        return total;
     }
 }

@@ -28,6 +28,10 @@ public final class TwinorbitCommand implements Runnable {
         CommandLine cl = new CommandLine(new TwinorbitCommand());
         cl.setExecutionExceptionHandler(new UserErrorHandler());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // help goes to stdout, usage errors to stderr: colours only when both are terminals
+        boolean colour = Terminal.isTerminal(Terminal.STDOUT) && Terminal.isTerminal(Terminal.STDERR);
+        cl.setColorScheme(CommandLine.Help.defaultColorScheme(colour ? CommandLine.Help.Ansi.AUTO
+                : CommandLine.Help.Ansi.OFF));
         return cl;
     }
 }

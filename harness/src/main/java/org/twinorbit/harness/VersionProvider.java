@@ -1,12 +1,12 @@
 package org.twinorbit.harness;
 
+import org.twinorbit.harness.report.ToolInfo;
 import picocli.CommandLine;
 
-/** Reads the version from the jar manifest (set by the build). */
+/** The version and git commit the build recorded ({@link ToolInfo}), as the JSON outputs name them. */
 public final class VersionProvider implements CommandLine.IVersionProvider {
     @Override
     public String[] getVersion() {
-        String v = TwinorbitCommand.class.getPackage().getImplementationVersion();
-        return new String[] {"twinorbit " + (v == null ? "(development build)" : v)};
+        return new String[] {ToolInfo.NAME + " " + ToolInfo.version() + " (git commit " + ToolInfo.gitCommit() + ")"};
     }
 }

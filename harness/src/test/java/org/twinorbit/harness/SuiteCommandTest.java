@@ -33,7 +33,7 @@ class SuiteCommandTest {
         Set<String> fields = new HashSet<>();
         for (JsonNode c : doc.get("cases")) {
             fields.add(c.get("case").get("field").asText());
-            assertTrue(c.get("case").has("eps") && c.get("case").has("rho_m") && c.get("case").has("L_m")
+            assertTrue(c.get("case").has("eps") && c.get("case").has("rho_m") && c.get("case").has("l_m")
                     && c.get("case").has("gyro_period_s"));
             boolean model = false;
             for (JsonNode r : c.get("results")) {

@@ -6,6 +6,7 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.ResolvedCase;
@@ -15,17 +16,22 @@ import org.twinorbit.harness.run.ResultRow;
 import org.twinorbit.harness.run.Stat;
 
 /**
- * The JSON contract of {@code run.json} and, per case, of {@code validation.json}. Field names
- * are snake_case; SI units are in the names where a quantity has one; a value that is not
- * defined (a μ change for a guiding center, a drift error where the reference has no drift) is
- * {@code null}. Wall-clock times are left out, so the file is byte-identical for any thread count.
+ * The JSON contract of {@code run.json} and, per case, of {@code validation.json}. Every key the
+ * contract names is snake_case and lower-case; the keys of {@code field_parameters} are the
+ * field's parameter names exactly as {@code -P} takes them (e.g. {@code B0}, {@code Rm}), since
+ * they are data rather than names of the contract. SI units are in the names where a quantity
+ * has one; a value that is not defined (a μ change for a guiding center, a drift error where the
+ * reference has no drift) is {@code null}; every count is a JSON integer. Wall-clock times are
+ * left out, so the file is byte-identical for any thread count and on any machine.
  *
  * <pre>
+ * tool:       name, version (Maven project version), git_commit ({@link ToolInfo}); at the top of
+ *             run.json and validation.json, once per file
  * case:       name, field, field_parameters {name: value}, species, mass_kg, charge_c, start_m [x,y,z]
  *             (initial guiding center), energy_ev, pitch_deg, phases, duration, duration_unit,
  *             pushers [..], steps_per_gyro, gc_integrators [..], gc_step_gyro, reference_rtol,
  *             gc_start (matched: each phase against its own guiding center; shared: one for all),
- *             eps (ρ0/L), rho_m (ρ0 = p/(|q|B)), L_m (null when infinite), b0_t (|B| at the start),
+ *             eps (ρ0/L), rho_m (ρ0 = p/(|q|B)), l_m (L; null when infinite), b0_t (|B| at the start),
  *             gyro_period_s (T_c), end_time_s, bounce_period_s (measured first when the duration is
  *             in bounces, else null), full_orbit_dt_s, gc_dt_s
  * results:    one object per integrator, then the model row:
@@ -43,13 +49,16 @@ import org.twinorbit.harness.run.Stat;
  *             position_error_rho per bounce period and signed ahead/behind),
  *             mu_jump_from (the points mu_jump compared: sheet-exit | mirror-points |
  *             first-last-gyration, '/'-joined when phases differ; null for a guiding-center row),
- *             invariant_error {invariant: {mean, rms, worst}} (full-orbit rows; |I − I0|/S0 with S0 the
- *             invariant's scale at the start: m|u| for momenta, m|u|R for angular momenta),
+ *             invariant_error {invariant: {mean, rms, worst}} (full-orbit rows; the invariant's name
+ *             lower-cased, e.g. l_z, p_phi; |I − I0|/S0 with S0 the invariant's scale at the start:
+ *             m|u| for momenta, m|u|R for angular momenta),
  *             order (slope of log error vs log dt over dt, dt/2, dt/4; null when not measurable),
  *             convergence {dt_s [..], error_rho [..]} (end-position error of phase 0 against the reference),
- *             steps, field_evaluations (per orbit, mean over the ensemble)
+ *             steps, field_evaluations (integers: per orbit, the mean over the ensemble rounded to
+ *             the nearest integer)
  * reference:  full_orbit and guiding_center: method, rtol, self_error_rho (|x − x_tight|/ρ0 at the end,
- *             x_tight from a run at rtol/100), energy_error, status, steps, field_evaluations
+ *             x_tight from a run at rtol/100), energy_error, status, steps (null: the adaptive
+ *             references do not count them), field_evaluations (integers, rounded means as above)
  * </pre>
  */
 public final class ResultJson {
@@ -58,8 +67,13 @@ public final class ResultJson {
 
     private ResultJson() {}
 
-    /** The whole document of one run. */
+    /** The whole document of one run (run.json, {@code run --json}): the tool, then {@link #caseDocument}. */
     public static Map<String, Object> document(CaseResult r) {
+        return ToolInfo.stamped(caseDocument(r));
+    }
+
+    /** One case without the tool object: an element of validation.json's {@code cases}. */
+    public static Map<String, Object> caseDocument(CaseResult r) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("case", caseObject(r));
         List<Object> results = new ArrayList<>();
@@ -99,7 +113,7 @@ public final class ResultJson {
         m.put("gc_start", c.gcStart().label());
         m.put("eps", num(rc.eps()));
         m.put("rho_m", num(rc.rho0()));
-        m.put("L_m", num(rc.length()));
+        m.put("l_m", num(rc.length()));
         m.put("b0_t", num(rc.b0()));
         m.put("gyro_period_s", num(rc.gyroPeriod()));
         m.put("end_time_s", num(r.endTime()));
@@ -121,15 +135,15 @@ public final class ResultJson {
         row.metrics().forEach((k, v) -> m.put(k, stat(v)));
         m.put("mu_jump_from", row.muJumpFrom());
         Map<String, Object> inv = new LinkedHashMap<>();
-        row.invariants().forEach((k, v) -> inv.put(k, stat(v)));
+        row.invariants().forEach((k, v) -> inv.put(k.toLowerCase(Locale.ROOT), stat(v)));
         m.put("invariant_error", inv);
         m.put("order", num(row.order()));
         Map<String, Object> conv = new LinkedHashMap<>();
         conv.put("dt_s", nums(row.convergenceDt()));
         conv.put("error_rho", nums(row.convergenceError()));
         m.put("convergence", conv);
-        m.put("steps", num(row.steps()));
-        m.put("field_evaluations", num(row.fieldEvaluations()));
+        m.put("steps", count(row.steps()));
+        m.put("field_evaluations", count(row.fieldEvaluations()));
         return m;
     }
 
@@ -140,8 +154,8 @@ public final class ResultJson {
         m.put("self_error_rho", num(s.selfErrorRho()));
         m.put("energy_error", num(s.energyError()));
         m.put("status", s.status());
-        m.put("steps", num(s.steps()));
-        m.put("field_evaluations", num(s.fieldEvaluations()));
+        m.put("steps", count(s.steps()));
+        m.put("field_evaluations", count(s.fieldEvaluations()));
         return m;
     }
 
@@ -156,6 +170,11 @@ public final class ResultJson {
     /** A finite number, or null. */
     static Double num(double v) {
         return Double.isFinite(v) ? v : null;
+    }
+
+    /** A count as an integer, a mean over the ensemble rounded to the nearest; null when not counted. */
+    public static Long count(double v) {
+        return Double.isFinite(v) ? Math.round(v) : null;
     }
 
     private static List<Double> nums(double[] v) {

@@ -14,6 +14,8 @@ import org.twinorbit.harness.run.Stat;
 /**
  * The tables people read: one row per integrator with the worst case over the gyrophase
  * ensemble, discretisation rows and the model row kept apart; and the CSV with mean and worst.
+ * Only the terminal table ({@link #tableWithWallTime}) has a wall-time column: what goes into a
+ * file must not depend on the machine ({@link Timings}).
  */
 public final class ResultTables {
 
@@ -22,24 +24,41 @@ public final class ResultTables {
     /** Columns of the compact table. */
     static final List<String> HEADER = List.of("integrator", "error kind", "status", "mu change", "mu jump",
             "energy err", "invariant err", "phase err", "drift err", "pos err/rho", "bounce err", "class",
-            "order", "steps", "field evals", "wall s");
+            "order", "steps", "field evals");
 
     /** The compact table of one case (worst over the ensemble). @param kind discretisation, model or null for all */
     public static TextTable table(CaseResult r, String kind) {
-        TextTable t = new TextTable(HEADER);
+        return table(r, kind, false);
+    }
+
+    /** The table of every row with the wall time summed over the ensemble last: for the terminal only. */
+    public static TextTable tableWithWallTime(CaseResult r) {
+        return table(r, null, true);
+    }
+
+    private static TextTable table(CaseResult r, String kind, boolean wall) {
+        List<String> header = new ArrayList<>(HEADER);
+        if (wall) {
+            header.add("wall s");
+        }
+        TextTable t = new TextTable(header);
         for (ResultRow row : r.rows()) {
             if (kind != null && !row.errorKind().equals(kind)) {
                 continue;
             }
             String status = row.status().equals("ok") ? "ok"
                     : row.status() + " at " + Format.number(row.statusTime() / r.resolved().gyroPeriod()) + " Tc";
-            t.add(List.of(row.integrator(), row.errorKind(), status, w(row, "mu_change"), w(row, "mu_jump"),
+            List<String> cells = new ArrayList<>(List.of(row.integrator(), row.errorKind(), status,
+                    w(row, "mu_change"), w(row, "mu_jump"),
                     w(row, "energy_error"), Format.number(worstInvariant(row)), w(row, "phase_error"),
                     w(row, "drift_error"), w(row, "position_error_rho"), w(row, "bounce_period_error"),
                     row.orbitClass() + (row.classAgreement() < 1 ? " (" + pct(row.classAgreement()) + " agree)" : ""),
                     Double.isNaN(row.order()) ? "—" : String.format(Locale.ROOT, "%.2f", row.order()),
-                    Format.number(Math.rint(row.steps())), Format.number(Math.rint(row.fieldEvaluations())),
-                    String.format(Locale.ROOT, "%.2f", row.wallSeconds())));
+                    Format.number(Math.rint(row.steps())), Format.number(Math.rint(row.fieldEvaluations()))));
+            if (wall) {
+                cells.add(Timings.seconds(row.wallSeconds()));
+            }
+            t.add(cells);
         }
         return t;
     }
@@ -123,7 +142,7 @@ public final class ResultTables {
                 c.add(n(row.metric(m).rms()));
                 c.add(n(row.metric(m).worst()));
             }
-            c.addAll(List.of(n(worstInvariant(row)), n(row.order()), n(row.steps()), n(row.fieldEvaluations())));
+            c.addAll(List.of(n(worstInvariant(row)), n(row.order()), count(row.steps()), count(row.fieldEvaluations())));
             sb.append(String.join(",", c)).append('\n');
         }
         return sb.toString();
@@ -131,6 +150,12 @@ public final class ResultTables {
 
     private static String n(double v) {
         return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+
+    /** A count as an integer (a mean over the ensemble rounded, as in the JSON); empty when not counted. */
+    private static String count(double v) {
+        Long c = ResultJson.count(v);
+        return c == null ? "" : c.toString();
     }
 
     private static String csv(String s) {

@@ -1,6 +1,7 @@
 package org.twinorbit.harness.scan;
 
 import org.twinorbit.harness.report.AtomicFiles;
+import org.twinorbit.harness.report.ToolInfo;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -201,10 +202,10 @@ public final class SafeUseMap {
     }
 
     /**
-     * JSON: {@code rows}, one per field, species and metric with {@code field}, {@code species},
+     * JSON: {@code tool} ({@link ToolInfo}: name, version, git commit); {@code rows}, one per field, species and metric with {@code field}, {@code species},
      * {@code metric}, {@code tolerance}, {@code eps_meaning}, {@code pitch_deg}, {@code eps_min},
      * {@code eps_max}, {@code outcome}, {@code eps_star}, {@code energy_ev_star} (null unless
-     * crossed); {@code not_scanned}: field -> reason.
+     * crossed); {@code not_scanned}: field (or field-species) -> reason, keyed by those names.
      */
     static String json(Result r) {
         List<Object> rows = new ArrayList<>();
@@ -225,6 +226,7 @@ public final class SafeUseMap {
             rows.add(m);
         }
         Map<String, Object> root = new LinkedHashMap<>();
+        root.put("tool", ToolInfo.json());
         root.put("rows", rows);
         root.put("not_scanned", r.skipped());
         return ScanJson.write(root);

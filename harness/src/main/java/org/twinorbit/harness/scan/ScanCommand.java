@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.cases.CaseSpec;
+import org.twinorbit.harness.report.Timings;
 import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.shared.Species;
@@ -22,6 +23,8 @@ import picocli.CommandLine.Spec;
 /**
  * {@code twinorbit scan}: the breakdown scan of DESIGN.md — the guiding-center model error
  * against ε over a log-spaced range, ε* per metric and tolerance, and the energy it reads as.
+ * Wall-clock times go to the terminal and to {@link Timings#FILE_NAME} in {@code --out}, never
+ * into scan.* or safe-use.*.
  */
 @Command(name = "scan", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Breakdown scan: the model error of the guiding-center approximation (guiding-center "
@@ -144,13 +147,16 @@ public final class ScanCommand implements Runnable {
         }
         PrintWriter w = spec.commandLine().getOut();
         printSummary(w, r);
+        Timings timings = new Timings("twinorbit scan --field " + field);
         if (setup.evaluator() instanceof ModelErrorEvaluator m) {
             double[] s = m.referenceSeconds();
-            w.printf(java.util.Locale.ROOT, "time in the references (summed over threads): full orbit %.1f s, guiding "
-                    + "center %.1f s%n", s[0], s[1]);
+            timings.total(String.format(java.util.Locale.ROOT, "time in the references (summed over threads): "
+                    + "full orbit %.1f s, guiding center %.1f s", s[0], s[1]));
         }
-        w.printf(java.util.Locale.ROOT, "wrote %s/scan.md, scan.csv, scan.json, scan.png in %.1f s%n", out,
+        String total = String.format(java.util.Locale.ROOT, "%d points in %.1f s", r.points().size(),
                 (System.nanoTime() - t0) * 1e-9);
+        timings.total(total).write(out);
+        w.printf("wrote %s/scan.md, scan.csv, scan.json, scan.png; %s (%s)%n", out, total, Timings.FILE_NAME);
         w.flush();
     }
 
@@ -175,8 +181,11 @@ public final class ScanCommand implements Runnable {
             }
         }
         PrintWriter w = spec.commandLine().getOut();
-        w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png (%d rows) in %.1f s%n", out,
-                r.rows().size(), (System.nanoTime() - t0) * 1e-9);
+        String total = String.format(java.util.Locale.ROOT, "safe-use map: %d rows in %.1f s", r.rows().size(),
+                (System.nanoTime() - t0) * 1e-9);
+        new Timings("twinorbit scan --safe-use").total(total).write(out);
+        w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png; %s (%s)%n", out, total,
+                Timings.FILE_NAME);
         w.flush();
     }
 

@@ -9,11 +9,18 @@ import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import org.twinorbit.harness.report.ToolInfo;
 
 /**
  * The JSON form of a scan (scan.json), the documented contract:
  * <ul>
- * <li>{@code scan}: the settings (field, parameters, species, axis, ε range, ensemble, duration);
+ * <li>{@code tool}: name, version and git commit of the build that wrote the file
+ *     ({@link org.twinorbit.harness.report.ToolInfo});
+ * <li>{@code scan}: the settings (field, parameters, species, axis, ε range, ensemble, duration;
+ *     {@code l_m} is the field's length L where ε is ρ0/L); the keys of {@code parameters} are
+ *     the field's parameter names as {@code -P} takes them (e.g. {@code Rm}), every other key is
+ *     lower-case snake_case;
  * <li>{@code points}: one object per ε and pitch angle with {@code eps}, {@code energy_ev},
  *     {@code pitch_deg}, for each metric {@code <metric>_mean} (phase mean of the signed error),
  *     {@code <metric>_rms} (rms over phases) and {@code <metric>_worst} (largest magnitude) over
@@ -34,18 +41,26 @@ import java.util.Map;
  *     first measured, {@code no-data}, {@code lost}: every point of that pitch lost by both models, {@code lost-above}: within
  *     tolerance wherever the particle stays, lost by both models from eps_star on), plus {@code kappa_star} for current sheets.
  * </ul>
+ * Counts are JSON integers: the flags {@code point_failed}, {@code lost} and {@code no_bounce}
+ * (0 or 1), and {@code full_orbit_evaluations} and {@code guiding_center_evaluations}, which are
+ * the mean over the gyrophase ensemble rounded to the nearest integer ({@link #COUNTS}).
  * A value that was not measured is {@code null}; an orbit that failed makes a worst case
- * {@code "inf"}. Numbers are written in their shortest exact form, so they read back unchanged.
+ * {@code "inf"}. Other numbers are written in their shortest exact form, so they read back unchanged.
  */
 public final class ScanJson {
 
     static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    /** The keys of a point that are counts, written as integers. */
+    static final Set<String> COUNTS = Set.of("point_failed", "lost", "no_bounce", "full_orbit_evaluations",
+            "guiding_center_evaluations");
 
     private ScanJson() {}
 
     /** The whole scan as JSON text. */
     public static String toJson(ScanResult r) {
         Map<String, Object> root = new LinkedHashMap<>();
+        root.put("tool", ToolInfo.json());
         root.put("scan", r.settings());
         List<Object> points = new ArrayList<>();
         for (ScanPoint p : r.points()) {
@@ -75,7 +90,7 @@ public final class ScanJson {
         m.put("energy_ev", p.energyEv());
         m.put("pitch_deg", p.pitchDeg());
         for (Map.Entry<String, Double> e : p.values().entrySet()) {
-            m.put(e.getKey(), number(e.getValue()));
+            m.put(e.getKey(), COUNTS.contains(e.getKey()) ? count(e.getValue()) : number(e.getValue()));
         }
         return m;
     }
@@ -119,6 +134,11 @@ public final class ScanJson {
             return v > 0 ? "inf" : "-inf";
         }
         return v;
+    }
+
+    /** A count rounded to the nearest integer; NaN (not counted) as null. */
+    static Object count(double v) {
+        return Double.isFinite(v) ? (Object) Math.round(v) : number(v);
     }
 
     static double readNumber(JsonNode n) {

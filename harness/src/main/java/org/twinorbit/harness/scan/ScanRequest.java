@@ -130,7 +130,7 @@ public final class ScanRequest {
             settings.put("energy_ev", axis.energyEv().applyAsDouble(lo));
             settings.put("scanned_parameter", recipe.parameter());
         } else {
-            settings.put("L_m", f.length());
+            settings.put("l_m", f.length());
         }
         settings.put("eps_min", lo);
         settings.put("eps_max", hi);

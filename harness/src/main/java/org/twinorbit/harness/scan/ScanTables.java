@@ -34,7 +34,10 @@ public final class ScanTables {
         };
     }
 
-    /** One row per point; full precision, empty where not measured, {@code inf} for a failed orbit. */
+    /**
+     * One row per point; full precision, counts as integers ({@link ScanJson#COUNTS}), empty where
+     * not measured, {@code inf} for a failed orbit.
+     */
     public static String csv(ScanResult r) {
         List<String> cols = columns(r);
         StringBuilder sb = new StringBuilder(String.join(",", cols)).append('\n');
@@ -42,7 +45,8 @@ public final class ScanTables {
             List<String> cells = new ArrayList<>();
             for (String c : cols) {
                 double v = cell(p, c);
-                cells.add(Double.isNaN(v) ? "" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : Double.toString(v));
+                cells.add(Double.isNaN(v) ? "" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                        : ScanJson.COUNTS.contains(c) ? Long.toString(Math.round(v)) : Double.toString(v));
             }
             sb.append(String.join(",", cells)).append('\n');
         }
@@ -106,7 +110,10 @@ public final class ScanTables {
         for (ScanPoint p : r.points()) {
             sb.append('|');
             for (String c : cols) {
-                sb.append(' ').append(Format.number(cell(p, c))).append(" |");
+                double v = cell(p, c);
+                // counts rounded as in scan.json, so that a resumed scan reads the same
+                sb.append(' ').append(Format.number(ScanJson.COUNTS.contains(c) && Double.isFinite(v) ? Math.rint(v) : v))
+                        .append(" |");
             }
             sb.append('\n');
         }

@@ -14,6 +14,7 @@ import org.twinorbit.harness.report.Plots;
 import org.twinorbit.harness.report.ResultJson;
 import org.twinorbit.harness.report.ResultTables;
 import org.twinorbit.harness.report.TextTable;
+import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.Parallel;
 import org.twinorbit.harness.run.ResultRow;
@@ -21,8 +22,11 @@ import org.twinorbit.harness.run.ResultRow;
 /**
  * The files of {@code twinorbit suite}: validation.md (a one-page overview, then a summary table
  * per field with plots of its first case), validation.csv (one line per case and integrator),
- * validation.json ({@code suite}: full or quick, {@code cases}: one {@link ResultJson#document}
- * per case) and the PNG plots under {@code plots/}.
+ * validation.json ({@code tool}: {@link ToolInfo}, {@code suite}: full or quick, {@code cases}: one
+ * {@link ResultJson#caseDocument} per case) and the PNG plots under {@code plots/}. None of them
+ * has a wall-clock time: for the same tool they are the same bytes on every run, whatever the
+ * machine or the thread count ({@code timings.md} has the times, see
+ * {@link org.twinorbit.harness.report.Timings}).
  */
 public final class ValidationReport {
 
@@ -37,10 +41,10 @@ public final class ValidationReport {
             doc.put("suite", quick ? "quick" : "full");
             List<Object> cases = new ArrayList<>();
             for (CaseResult r : results) {
-                cases.add(ResultJson.document(r));
+                cases.add(ResultJson.caseDocument(r));
             }
             doc.put("cases", cases);
-            AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(doc));
+            AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(ToolInfo.stamped(doc)));
         }));
         jobs.add(new Parallel.Job(1, () -> {
             StringBuilder csv = new StringBuilder(ResultTables.csvHeader());

@@ -35,6 +35,10 @@ class SafeUseMapWriteTest {
         assertEquals(0.09, first.get("eps_star").asDouble());
         assertTrue(root.get("rows").get(1).get("eps_star").isNull(), "no number for an open outcome");
         assertEquals("no length L", root.get("not_scanned").get("uniform").asText());
+        assertEquals("twinorbit", root.get("tool").get("name").asText());
+        assertEquals(System.getProperty("twinorbit.expected.version"), root.get("tool").get("version").asText());
+        assertTrue(root.get("tool").has("git_commit"));
+        assertEquals(List.of(), org.twinorbit.harness.JsonKeys.notSnakeCase(root));
         List<String> csv = Files.readAllLines(dir.resolve("safe-use.csv"));
         assertEquals(3, csv.size());
         assertTrue(csv.get(2).endsWith("not-reached,,"), csv.get(2));
