@@ -1,10 +1,8 @@
 package org.twinorbit.harness;
 
 import org.twinorbit.harness.run.Registry;
-import org.twinorbit.harness.verdict.Expectation;
 import org.twinorbit.harness.verdict.RowVerdict;
 import org.twinorbit.harness.verdict.VerdictReport;
-import org.twinorbit.harness.verdict.Verdicts;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
@@ -69,16 +67,12 @@ public final class SuiteCommand implements Callable<Integer> {
         ValidationReport.write(results, quick, out, threads);
         double seconds = (System.nanoTime() - t0) * 1e-9;
         PrintWriter pw = spec.commandLine().getOut();
-        pw.print(ValidationReport.overview(results).aligned());
+        pw.print(ValidationReport.overview(results, quick).aligned());
         pw.println();
         String total = String.format(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads", cases.size(), seconds,
                 threads);
         pw.printf("%s; wrote %s, validation.csv, validation.json and plots/%n", total, out.resolve("validation.md"));
-        List<RowVerdict> verdicts = new java.util.ArrayList<>();
-        for (CaseResult r : results) {
-            verdicts.addAll(Verdicts.judge(r));
-        }
-        verdicts = Expectation.apply(verdicts, ValidationSuite.expectations());
+        List<RowVerdict> verdicts = ValidationSuite.verdicts(results, quick);
         for (String line : VerdictReport.lines(verdicts)) {
             pw.println(line);
         }

@@ -5,13 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** The command line run in-process: exit codes, messages, and that bad input runs nothing. */
 class CommandLineTest {
@@ -19,20 +16,7 @@ class CommandLineTest {
     @TempDir
     Path tmp;
 
-    /** Exit code, stdout and stderr of one invocation. */
-    record Outcome(int code, String out, String err) {}
-
-    static Outcome exec(String... args) {
-        CommandLine cl = TwinorbitCommand.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
-    private Outcome badRun(String... options) {
+    private TestCommandLine.Outcome badRun(String... options) {
         Path dir = tmp.resolve("out");
         String[] args = new String[options.length + 4];
         args[0] = "run";
@@ -40,7 +24,7 @@ class CommandLineTest {
         args[2] = "--out";
         args[3] = dir.toString();
         System.arraycopy(options, 0, args, 4, options.length);
-        Outcome o = exec(args);
+        TestCommandLine.Outcome o = TestCommandLine.exec(args);
         assertEquals(2, o.code(), () -> "exit code; stderr: " + o.err());
         assertEquals("", o.out(), "no table is printed");
         assertFalse(Files.exists(dir), "no output directory is created: no work ran");
@@ -50,39 +34,39 @@ class CommandLineTest {
 
     @Test
     void unknownFieldListsTheFields() {
-        Outcome o = badRun("--field", "bottle");
+        TestCommandLine.Outcome o = badRun("--field", "bottle");
         assertTrue(o.err().contains("field: unknown field 'bottle'; allowed: uniform, crossed, gradient"), o.err());
     }
 
     @Test
     void unknownIntegratorListsTheIntegrators() {
-        Outcome o = badRun("--pushers", "boris,leapfrog9");
+        TestCommandLine.Outcome o = badRun("--pushers", "boris,leapfrog9");
         assertTrue(o.err().contains("pushers: unknown integrator 'leapfrog9'; allowed: boris, boris-nr, vay"), o.err());
-        Outcome g = badRun("--gc-integrators", "gc-euler");
+        TestCommandLine.Outcome g = badRun("--gc-integrators", "gc-euler");
         assertTrue(g.err().contains("gc-integrators: unknown integrator 'gc-euler'; allowed: gc-rk4"), g.err());
     }
 
     @Test
     void unknownSpeciesListsTheSpecies() {
-        Outcome o = badRun("--species", "muon");
+        TestCommandLine.Outcome o = badRun("--species", "muon");
         assertTrue(o.err().contains("species: unknown species 'muon'; allowed: electron, positron, proton"), o.err());
     }
 
     @Test
     void negativeEnergyIsRefused() {
-        Outcome o = badRun("--energy", "-5");
+        TestCommandLine.Outcome o = badRun("--energy", "-5");
         assertTrue(o.err().contains("energy: the kinetic energy must be > 0 eV, got -5.0"), o.err());
     }
 
     @Test
     void pitchOutsideZeroTo180IsRefused() {
-        Outcome o = badRun("--pitch", "200");
+        TestCommandLine.Outcome o = badRun("--pitch", "200");
         assertTrue(o.err().contains("pitch: the pitch angle must lie in [0, 180] degrees, got 200.0"), o.err());
     }
 
     @Test
     void startOutsideTheDomainIsRefused() {
-        Outcome o = badRun("--field", "mirror", "--start", "0,0,1.5");
+        TestCommandLine.Outcome o = badRun("--field", "mirror", "--start", "0,0,1.5");
         assertTrue(o.err().contains("start: the guiding center (0.0, 0.0, 1.5) m lies outside the domain of field 'mirror'"),
                 o.err());
     }
@@ -91,16 +75,16 @@ class CommandLineTest {
     @Test
     void energyGivingEpsAboveOneIsRefused() {
         // a 1 GeV proton in the 0.5 T, 1 m mirror has rho0 = 11.3 m, eps = 11
-        Outcome o = badRun("--field", "mirror", "--energy", "1e9");
+        TestCommandLine.Outcome o = badRun("--field", "mirror", "--energy", "1e9");
         assertTrue(o.err().contains("energy: 1.000e+09 eV gives eps = rho0/L = 11.31"), o.err());
         assertTrue(o.err().contains("must be < 1"), o.err());
     }
 
     @Test
     void tooFewStepsAndBadDurationUnitAreRefused() {
-        Outcome o = badRun("--steps-per-gyro", "3");
+        TestCommandLine.Outcome o = badRun("--steps-per-gyro", "3");
         assertTrue(o.err().contains("steps-per-gyro: must lie in [4, 1000000], got 3"), o.err());
-        Outcome u = badRun("--duration-unit", "fortnights");
+        TestCommandLine.Outcome u = badRun("--duration-unit", "fortnights");
         assertTrue(u.err().contains("--duration-unit") && u.err().contains("GYROPERIODS, BOUNCES"), u.err());
     }
 
@@ -108,7 +92,7 @@ class CommandLineTest {
     void malformedYamlNamesLineAndColumn() throws IOException {
         Path f = tmp.resolve("case.yaml");
         Files.writeString(f, "field: mirror\npitch: [60\nenergy: 1000\n");
-        Outcome o = badRun("--case", f.toString());
+        TestCommandLine.Outcome o = badRun("--case", f.toString());
         assertTrue(o.err().matches("(?s).*case\\.yaml: line \\d+, column \\d+: .*"), o.err());
     }
 
@@ -116,7 +100,7 @@ class CommandLineTest {
     void unknownYamlKeyListsTheKeys() throws IOException {
         Path f = tmp.resolve("case.yaml");
         Files.writeString(f, "field: mirror\npitch: 60\nenergie: 1000\n");
-        Outcome o = badRun("--case", f.toString());
+        TestCommandLine.Outcome o = badRun("--case", f.toString());
         assertTrue(o.err().contains("case.yaml: line 3, column 1: unknown key 'energie'; allowed keys: name, field,"),
                 o.err());
     }
@@ -126,7 +110,7 @@ class CommandLineTest {
         Path f = tmp.resolve("case.yaml");
         Files.writeString(f, "field: mirror\nspecies: proton\neps: 0.02\npitch: 70\nphases: 2\nduration: 6\n"
                 + "pushers: [boris]\ngc-integrators: [gc-rk4]\n");
-        Outcome o = exec("run", "--quiet", "--case", f.toString(), "--pitch", "80");
+        TestCommandLine.Outcome o = TestCommandLine.exec("run", "--quiet", "--case", f.toString(), "--pitch", "80");
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().contains("field mirror, proton") && o.out().contains("pitch 80 deg"), o.out());
         assertTrue(o.out().contains("boris") && o.out().contains("gc-reference"), o.out());
@@ -136,7 +120,7 @@ class CommandLineTest {
     void unusableOutputDirectoryIsRefusedBeforeAnyWork() throws IOException {
         Path file = tmp.resolve("a-file");
         Files.writeString(file, "not a directory");
-        Outcome o = exec("suite", "--quick", "--quiet", "--out", file.resolve("sub").toString());
+        TestCommandLine.Outcome o = TestCommandLine.exec("suite", "--quick", "--quiet", "--out", file.resolve("sub").toString());
         assertEquals(2, o.code(), o.err());
         assertTrue(o.err().startsWith("twinorbit: --out: cannot create directory"), o.err());
         assertEquals("", o.out());
@@ -144,7 +128,7 @@ class CommandLineTest {
 
     @Test
     void integratorsListsEveryIntegrator() {
-        Outcome o = exec("integrators", "--json");
+        TestCommandLine.Outcome o = TestCommandLine.exec("integrators", "--json");
         assertEquals(0, o.code());
         for (String name : new String[] {"\"boris\"", "\"boris-nr\"", "\"vay\"", "\"higuera-cary\"", "\"rk4\"", "\"gc-rk4\""}) {
             assertTrue(o.out().contains("\"name\" : " + name), name);

@@ -12,8 +12,8 @@ class ThreadCountTest {
     void serialAndParallelJsonAreIdentical() {
         String[] base = {"run", "--quiet", "--json", "--field", "dipole", "--eps", "0.03", "--pitch", "50",
             "--phases", "4", "--duration", "1", "--duration-unit", "bounces", "--pushers", "boris,rk4"};
-        CommandLineTest.Outcome one = CommandLineTest.exec(concat(base, "--threads", "1"));
-        CommandLineTest.Outcome three = CommandLineTest.exec(concat(base, "--threads", "3"));
+        TestCommandLine.Outcome one = TestCommandLine.exec(concat(base, "--threads", "1"));
+        TestCommandLine.Outcome three = TestCommandLine.exec(concat(base, "--threads", "3"));
         assertEquals(0, one.code(), one.err());
         assertEquals(0, three.code(), three.err());
         assertTrue(one.out().contains("\"error_kind\" : \"model\""), one.out());

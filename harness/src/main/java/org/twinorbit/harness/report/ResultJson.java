@@ -14,6 +14,9 @@ import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.ReferenceSummary;
 import org.twinorbit.harness.run.ResultRow;
 import org.twinorbit.harness.run.Stat;
+import org.twinorbit.harness.verdict.Finding;
+import org.twinorbit.harness.verdict.RowVerdict;
+import org.twinorbit.harness.verdict.Verdicts;
 
 /**
  * The JSON contract of {@code run.json} and, per case, of {@code validation.json}. Every key the
@@ -55,7 +58,10 @@ import org.twinorbit.harness.run.Stat;
  *             order (slope of log error vs log dt over dt, dt/2, dt/4; null when not measurable),
  *             convergence {dt_s [..], error_rho [..]} (end-position error of phase 0 against the reference),
  *             steps, field_evaluations (integers: per orbit, the mean over the ensemble rounded to
- *             the nearest integer)
+ *             the nearest integer),
+ *             verdict (integrator rows): result (pass | fail | expected-fail) and findings [{check
+ *             (stable | class | runaway | order | energy-trend | reference-margin), severity
+ *             (failure | warning), expected, detail}], the checks the row did not pass
  * reference:  full_orbit and guiding_center: method, rtol, self_error_rho (|x − x_tight|/ρ0 at the end,
  *             x_tight from a run at rtol/100), energy_error, status, steps (null: the adaptive
  *             references do not count them), field_evaluations (integers, rounded means as above)
@@ -69,16 +75,25 @@ public final class ResultJson {
 
     /** The whole document of one run (run.json, {@code run --json}): the tool, then {@link #caseDocument}. */
     public static Map<String, Object> document(CaseResult r) {
-        return ToolInfo.stamped(caseDocument(r));
+        return ToolInfo.stamped(caseDocument(r, Verdicts.judge(r)));
     }
 
-    /** One case without the tool object: an element of validation.json's {@code cases}. */
-    public static Map<String, Object> caseDocument(CaseResult r) {
+    /**
+     * One case without the tool object: an element of validation.json's {@code cases}.
+     *
+     * @param verdicts the verdicts of its integrator rows (with the suite's expectations applied)
+     */
+    public static Map<String, Object> caseDocument(CaseResult r, List<RowVerdict> verdicts) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("case", caseObject(r));
         List<Object> results = new ArrayList<>();
         for (ResultRow row : r.rows()) {
-            results.add(rowObject(row));
+            Map<String, Object> o = rowObject(row);
+            if (row.errorKind().equals("discretisation")) {
+                verdicts.stream().filter(v -> v.integrator().equals(row.integrator())).findFirst()
+                        .ifPresent(v -> o.put("verdict", verdictObject(v)));
+            }
+            results.add(o);
         }
         m.put("results", results);
         Map<String, Object> refs = new LinkedHashMap<>();
@@ -144,6 +159,22 @@ public final class ResultJson {
         m.put("convergence", conv);
         m.put("steps", count(row.steps()));
         m.put("field_evaluations", count(row.fieldEvaluations()));
+        return m;
+    }
+
+    static Map<String, Object> verdictObject(RowVerdict v) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("result", v.label());
+        List<Object> findings = new ArrayList<>();
+        for (Finding f : v.findings()) {
+            Map<String, Object> o = new LinkedHashMap<>();
+            o.put("check", f.check().label());
+            o.put("severity", f.failure() ? "failure" : "warning");
+            o.put("expected", f.expected());
+            o.put("detail", f.detail());
+            findings.add(o);
+        }
+        m.put("findings", findings);
         return m;
     }
 

@@ -40,24 +40,6 @@ public record ResultRow(String integrator, String model, String errorKind, Strin
             "phase_error", "drift_error", "position_error_rho", "bounce_period_s", "bounce_period_error",
             "mirror_field_t", "mirror_field_error");
 
-    /**
-     * What is wrong with this row, empty when nothing: {@code unstable} or {@code model-failure}
-     * always; an orbit class that differs from the reference's in some phase. A lost particle
-     * is not by itself a failure — in a loss cone it is the physically right answer — only when
-     * the reference did not lose it too (or lost one the integrator kept).
-     */
-    public String problem() {
-        if (!status.equals("ok") && !status.equals("lost")) {
-            return classAgreement < 1.0 ? status + ", class " + orbitClass + " in "
-                    + Math.round(100 * classAgreement) + "% of phases the reference's" : status;
-        }
-        if (classAgreement < 1.0) {
-            return "class " + orbitClass + " differs from the reference's in "
-                    + Math.round(100 * (1 - classAgreement)) + "% of phases";
-        }
-        return "";
-    }
-
     /** A metric by name, {@link Stat#NONE} when the row has none. */
     public Stat metric(String name) {
         return metrics.getOrDefault(name, Stat.NONE);

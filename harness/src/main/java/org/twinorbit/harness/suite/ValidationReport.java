@@ -17,6 +17,8 @@ import org.twinorbit.harness.report.TextTable;
 import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.Parallel;
+import org.twinorbit.harness.verdict.RowVerdict;
+import org.twinorbit.harness.verdict.VerdictReport;
 import org.twinorbit.harness.run.ResultRow;
 
 /**
@@ -41,7 +43,7 @@ public final class ValidationReport {
             doc.put("suite", quick ? "quick" : "full");
             List<Object> cases = new ArrayList<>();
             for (CaseResult r : results) {
-                cases.add(ResultJson.caseDocument(r));
+                cases.add(ResultJson.caseDocument(r, ValidationSuite.verdicts(List.of(r), quick)));
             }
             doc.put("cases", cases);
             AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(ToolInfo.stamped(doc)));
@@ -73,19 +75,20 @@ public final class ValidationReport {
     }
 
     /** The one-page overview: one line per case with the numbers that matter most. */
-    public static TextTable overview(List<CaseResult> results) {
+    public static TextTable overview(List<CaseResult> results, boolean quick) {
         TextTable t = new TextTable(List.of("case", "species", "eps", "pitch", "class", "boris energy",
                 "boris phase", "boris order", "rk4 energy", "gc-rk4 pos/rho", "model mu change", "model mu jump",
-                "model drift", "model pos/rho", "model bounce", "not ok"));
+                "model drift", "model pos/rho", "model bounce", "verdict"));
         for (CaseResult r : results) {
             ResultRow boris = find(r, "boris", "discretisation");
             ResultRow rk4 = find(r, "rk4", "discretisation");
             ResultRow gc = find(r, "gc-rk4", "discretisation");
             ResultRow model = find(r, "gc-reference", "model");
             List<String> bad = new ArrayList<>();
-            for (ResultRow row : r.rows()) {
-                if (!row.problem().isEmpty()) {
-                    bad.add(row.integrator() + ": " + row.problem());
+            for (RowVerdict v : ValidationSuite.verdicts(List.of(r), quick)) {
+                String cell = VerdictReport.cell(v);
+                if (!cell.isEmpty()) {
+                    bad.add(v.integrator() + ": " + cell);
                 }
             }
             t.add(List.of(r.resolved().spec().name(), r.resolved().species().name(), Format.number(r.resolved().eps()),
@@ -124,7 +127,7 @@ public final class ValidationReport {
                 .append("cases named `-shared` compare the same orbits with the one zeroth-order guiding center the ring ")
                 .append("shares, whose O(eps) start-up offset per phase shows in the drift, position and bounce ")
                 .append("columns.\n\n");
-        sb.append(overview(results).markdown()).append('\n');
+        sb.append(overview(results, quick).markdown()).append('\n');
         Set<String> fields = new LinkedHashSet<>();
         for (CaseResult r : results) {
             fields.add(r.resolved().spec().field());

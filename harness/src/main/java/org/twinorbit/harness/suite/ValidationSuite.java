@@ -9,6 +9,9 @@ import org.twinorbit.harness.cases.GuidingCenterStart;
 import org.twinorbit.harness.run.Registry;
 import org.twinorbit.harness.verdict.Check;
 import org.twinorbit.harness.verdict.Expectation;
+import org.twinorbit.harness.verdict.RowVerdict;
+import org.twinorbit.harness.verdict.Verdicts;
+import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
@@ -37,16 +40,21 @@ public final class ValidationSuite {
         return all(quick).stream().map(c -> c.withPushers(pushers)).toList();
     }
 
-    /**
-     * The failures that are the point of a case: reported as expected, and reported as failures
-     * when they stop happening.
-     */
-    public static List<Expectation> expectations() {
-        return EXPECTED;
+    /** The verdicts of suite cases, the expectations of the full suite applied ({@code quick} has none). */
+    public static List<RowVerdict> verdicts(List<CaseResult> results, boolean quick) {
+        List<RowVerdict> v = new ArrayList<>();
+        for (CaseResult r : results) {
+            v.addAll(Verdicts.judge(r));
+        }
+        return Expectation.apply(v, quick ? List.of() : EXPECTED);
     }
 
     private static final String RK4_DIPOLE = "RK4 is not time-reversible: over two bounces at 30 degrees in the "
             + "dipole its energy error grows until the orbit leaves the reference's";
+    /**
+     * The failures that are the point of a case of the full suite: reported as expected, and
+     * reported as failures when they stop happening.
+     */
     private static final List<Expectation> EXPECTED = List.of(
             new Expectation("dipole-proton-eps0.05", "rk4", Check.STABLE, RK4_DIPOLE),
             new Expectation("dipole-proton-eps0.05", "rk4", Check.RUNAWAY, RK4_DIPOLE),

@@ -2,7 +2,6 @@ package org.twinorbit.harness.run;
 
 import org.twinorbit.integrators.OrbitStatus;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
@@ -28,7 +27,6 @@ class ModelRowStatusTest {
         assertEquals("lost-full-orbit", model.status());
         assertTrue(model.statusTime() > 0, "time of the first full-orbit loss");
         assertTrue(model.classAgreement() < 1.0);
-        assertFalse(model.problem().isEmpty(), "a row whose models disagree on the outcome has a problem");
     }
 
     @Test
