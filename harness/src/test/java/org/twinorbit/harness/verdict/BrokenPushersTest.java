@@ -78,4 +78,17 @@ class BrokenPushersTest {
         assertFalse(o.out().contains("/ boris: stable") || o.out().contains("/ boris: runaway")
                 || o.out().contains("/ boris: energy-trend") || o.out().contains("/ boris: order:"), o.out());
     }
+
+    /**
+     * In a time-dependent field the energy is not conserved, so only the comparison with the
+     * reference along the run can see Euler's growth of |u| (a factor sqrt(1 + (Ω dt)²) per step).
+     */
+    @Test
+    void runExitsOneWhenEulerRunsAwayInTheRamp() {
+        TestCommandLine.Outcome o = TestCommandLine.exec("run", "--field", "ramp", "--phases", "2", "--pushers",
+                "test-euler,boris", "--gc-integrators", "none", "--quiet");
+        assertEquals(1, o.code(), o.out() + o.err());
+        assertTrue(o.out().contains("ramp-proton / test-euler: runaway"), o.out());
+        assertFalse(o.out().contains("/ boris:"), o.out());
+    }
 }
