@@ -79,12 +79,16 @@ class MatchedStartScalingTest {
         for (double v : matched.worstValues()) {
             cells.add(String.format(Locale.ROOT, "%.2e", v));
         }
-        String line = String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %.2f | %.2f | %.2f | %.2f |%n", field,
+        String line = String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %.2f | %.2f | %s | %s |%n", field,
                 Math.round(pitch), start.isEmpty() ? "default" : start.replace(';', ','), metric,
-                String.join(" ", cells), matched.worst(), matched.spread(), shared == null ? Double.NaN : shared.worst(),
-                shared == null ? Double.NaN : shared.spread());
+                String.join(" ", cells), matched.worst(), matched.spread(), slope(shared == null ? null : shared.worst()),
+                slope(shared == null ? null : shared.spread()));
         Files.createDirectories(TABLE.getParent());
         Files.writeString(TABLE, line, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+    }
+
+    private static String slope(Double s) {
+        return s == null ? "—" : String.format(Locale.ROOT, "%.2f", s);
     }
 
     @ParameterizedTest(name = "{0} pitch {1} {3}")
