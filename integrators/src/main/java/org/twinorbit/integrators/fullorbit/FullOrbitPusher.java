@@ -7,7 +7,7 @@ import org.twinorbit.shared.Species;
 /**
  * A fixed-step full-orbit scheme for the Lorentz equations dx/dt = u/γ, du/dt = (q/m)(E + u×B/γ)
  * with u = γv. Discovered through {@link java.util.ServiceLoader}: list the class in
- * {@code META-INF/services/org.twinorbit.integrators.FullOrbitPusher}.
+ * {@code META-INF/services/org.twinorbit.integrators.fullorbit.FullOrbitPusher}.
  */
 public interface FullOrbitPusher {
 
