@@ -21,4 +21,13 @@ public final class TestCommandLine {
         int code = cl.execute(args);
         return new Outcome(code, out.toString(), err.toString());
     }
+
+    /** Stdout of an invocation that must succeed (exit 0), its stderr in the failure message. */
+    public static String succeeded(String... args) {
+        Outcome o = exec(args);
+        if (o.code() != 0) {
+            throw new AssertionError("exit " + o.code() + " from " + String.join(" ", args) + ": " + o.err());
+        }
+        return o.out();
+    }
 }

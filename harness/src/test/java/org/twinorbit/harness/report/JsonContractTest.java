@@ -1,5 +1,6 @@
 package org.twinorbit.harness.report;
 
+import org.twinorbit.harness.TestCommandLine;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -7,16 +8,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.twinorbit.harness.JsonKeys;
-import org.twinorbit.harness.TwinorbitCommand;
-import picocli.CommandLine;
 
 /**
  * Every JSON output names the build that wrote it, writes counts as integers and spells every
@@ -34,13 +31,7 @@ class JsonContractTest {
         "--phases", "3", "--duration", "4", "--pushers", "boris,rk4"};
 
     private static String stdout(String... args) {
-        CommandLine cl = TwinorbitCommand.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        assertEquals(0, cl.execute(args), err::toString);
-        return out.toString();
+        return TestCommandLine.succeeded(args);
     }
 
     private static String[] with(String[] a, String... b) {

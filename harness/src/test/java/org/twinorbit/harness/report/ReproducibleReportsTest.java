@@ -1,21 +1,18 @@
 package org.twinorbit.harness.report;
 
+import org.twinorbit.harness.TestCommandLine;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.twinorbit.harness.TwinorbitCommand;
-import picocli.CommandLine;
 
 /**
  * Writing the reports twice with the same tool gives the same bytes, plots included: no file
@@ -27,13 +24,7 @@ class ReproducibleReportsTest {
     Path tmp;
 
     private static String exec(String... args) {
-        CommandLine cl = TwinorbitCommand.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        assertEquals(0, cl.execute(args), err::toString);
-        return out.toString();
+        return TestCommandLine.succeeded(args);
     }
 
     /** Runs {@code args --out DIR} into two directories and compares every file but timings.md. */
