@@ -97,6 +97,7 @@ class MatchedStartScalingTest {
             "toroidal,      30, '',        drift_error,         false",
             "dipole,        60, '',        drift_error,         true",
             "dipole,        60, '',        bounce_period_error, true",
+            "dipole,        40, '',        drift_error,         true",
             "dipole,        40, '',        bounce_period_error, true",
             "mirror,        60, 0.1;0;0,   drift_error,         true",
             "mirror,        60, 0.1;0;0,   bounce_period_error, true",
@@ -134,15 +135,16 @@ class MatchedStartScalingTest {
      * plain gyration average of v·b and μ is off by O(ε) (the Baños term; Baños, J. Plasma Phys.
      * 1, 1967): this case fails (slope 1.1) unless p∥ comes from the exact p_φ and μ from the
      * exact energy, as {@link MatchedStart} does. The shared start is reported, not asserted: in
-     * this short range its slopes lie between 1.2 and 1.8.
+     * this short range its slopes lie between 1.2 and 1.8. At 75° the drift error is not asserted
+     * either: it has a floor of ~1e-4 at the smallest ε (fit slope 1.33; see results/README.md).
      */
-    @ParameterizedTest(name = "tokamak pitch 80 {0}")
-    @CsvSource({"drift_error", "bounce_period_error"})
-    void tokamakModelErrorIsSecondOrder(String metric) throws IOException {
+    @ParameterizedTest(name = "tokamak pitch {0} {1}")
+    @CsvSource({"80, drift_error", "80, bounce_period_error", "75, bounce_period_error"})
+    void tokamakModelErrorIsSecondOrder(double pitch, String metric) throws IOException {
         double[] eps = {0.005, 0.01, 0.02};
-        Fit matched = fit(eps, "tokamak", 80, "", metric, "matched", true);
-        Fit shared = fit(eps, "tokamak", 80, "", metric, "shared", true);
-        record("tokamak", 80, "", metric, matched, shared);
+        Fit matched = fit(eps, "tokamak", pitch, "", metric, "matched", true);
+        Fit shared = fit(eps, "tokamak", pitch, "", metric, "shared", true);
+        record("tokamak", pitch, "", metric, matched, shared);
         assertTrue(matched.worst() >= 1.8, "tokamak " + metric + " matched-start slope " + matched.worst());
         assertTrue(matched.spread() >= 1.8, "tokamak " + metric + " matched-start spread slope " + matched.spread());
     }
