@@ -7,8 +7,8 @@ import org.twinorbit.harness.metrics.Track;
 
 /**
  * The centring of gyration means in {@link MatchedStart}: the mean of f over [t0 − T/2, t0 + T/2]
- * is f(t0) + f''(t0) T²/24 + O(T⁴) (Taylor's theorem, the midpoint rule's error term; common
- * practice), so for a quadratic f the corrected value is f(t0) exactly, while the plain mean is
+ * is f(t0) + f''(t0) T²/24 + O(T⁴) (Taylor's theorem, the midpoint rule's error term:
+ * common practice), so for a quadratic f the corrected value is f(t0) exactly, while the plain mean is
  * off by c T²/12 for f = c t².
  */
 class MatchedStartCentringTest {
