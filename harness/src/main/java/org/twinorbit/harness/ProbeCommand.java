@@ -13,6 +13,7 @@ import java.util.concurrent.Callable;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.FieldParameterException;
 import org.twinorbit.fields.Fields;
+import org.twinorbit.harness.export.FieldProbe;
 import org.twinorbit.harness.report.ResultJson;
 import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.shared.FieldSample;
@@ -31,15 +32,6 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Evaluate a field of the library at points: B, E, the Jacobian dB_i/dx_j, |B|, b, grad|B| and "
                 + "the field-line curvature (b.grad)b, as CSV (SI units in the column names) or JSON.")
 public final class ProbeCommand implements Callable<Integer> {
-
-    /** Columns after the point, in output order, with their SI units in the names. */
-    static final List<String> COLUMNS = List.of("bx_t", "by_t", "bz_t", "b_t", "ux", "uy", "uz",
-            "ex_v_per_m", "ey_v_per_m", "ez_v_per_m",
-            "dbx_dx_t_per_m", "dbx_dy_t_per_m", "dbx_dz_t_per_m",
-            "dby_dx_t_per_m", "dby_dy_t_per_m", "dby_dz_t_per_m",
-            "dbz_dx_t_per_m", "dbz_dy_t_per_m", "dbz_dz_t_per_m",
-            "grad_b_x_t_per_m", "grad_b_y_t_per_m", "grad_b_z_t_per_m",
-            "curvature_x_per_m", "curvature_y_per_m", "curvature_z_per_m", "in_domain");
 
     @Option(names = "--field", paramLabel = "NAME", required = true, description = "Field of the library (see 'twinorbit fields').")
     String field;
@@ -86,10 +78,10 @@ public final class ProbeCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         List<Map<String, Object>> rows = new ArrayList<>();
-        StringBuilder csv = new StringBuilder("x_m,y_m,z_m,t_s," + String.join(",", COLUMNS) + "\n");
+        StringBuilder csv = new StringBuilder("x_m,y_m,z_m,t_s," + String.join(",", FieldProbe.COLUMNS) + "\n");
         FieldSample s = new FieldSample();
         for (double[] p : at) {
-            double[] v = values(f, p, s);
+            double[] v = FieldProbe.values(f, p, s);
             Map<String, Object> row = new LinkedHashMap<>();
             row.put("x_m", p[0]);
             row.put("y_m", p[1]);
@@ -97,10 +89,10 @@ public final class ProbeCommand implements Callable<Integer> {
             row.put("t_s", p[3]);
             csv.append(num(p[0])).append(',').append(num(p[1])).append(',').append(num(p[2])).append(',')
                     .append(num(p[3]));
-            for (int i = 0; i < COLUMNS.size(); i++) {
-                boolean flag = i == COLUMNS.size() - 1;
+            for (int i = 0; i < FieldProbe.COLUMNS.size(); i++) {
+                boolean flag = i == FieldProbe.COLUMNS.size() - 1;
                 // outside the domain nothing is evaluated: null in JSON, an empty cell in CSV
-                row.put(COLUMNS.get(i), flag ? (Object) (v[i] == 1) : Double.isFinite(v[i]) ? (Object) v[i] : null);
+                row.put(FieldProbe.COLUMNS.get(i), flag ? (Object) (v[i] == 1) : Double.isFinite(v[i]) ? (Object) v[i] : null);
                 csv.append(',').append(flag ? (v[i] == 1 ? "true" : "false") : num(v[i]));
             }
             csv.append('\n');
@@ -117,28 +109,6 @@ public final class ProbeCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
-    }
-
-    /** The output columns at point p = (x, y, z, t); NaN for a point outside the domain. */
-    static double[] values(Field f, double[] p, FieldSample s) {
-        double[] v = new double[COLUMNS.size()];
-        boolean inside = f.inDomain(p[0], p[1], p[2]);
-        if (!inside) {
-            java.util.Arrays.fill(v, Double.NaN);
-            v[v.length - 1] = 0;
-            return v;
-        }
-        f.evaluate(p[3], p[0], p[1], p[2], s);
-        double[] b = s.unitB(new double[3]);
-        double[] g = s.gradBMag(new double[3]);
-        double[] k = s.curvature(new double[3]);
-        double[] head = {s.bx, s.by, s.bz, s.bMag(), b[0], b[1], b[2], s.ex, s.ey, s.ez};
-        System.arraycopy(head, 0, v, 0, head.length);
-        System.arraycopy(s.dB, 0, v, head.length, 9);
-        System.arraycopy(g, 0, v, head.length + 9, 3);
-        System.arraycopy(k, 0, v, head.length + 12, 3);
-        v[v.length - 1] = 1;
-        return v;
     }
 
     private double[] point(String text, String where) {

@@ -133,6 +133,29 @@ public final class CaseRunner {
         return out;
     }
 
+    /**
+     * What a run of the case would integrate, without integrating it: the ensemble's initial
+     * states, the full-orbit step and the step count, and the convergence sweep. A duration in
+     * bounces or crossings is measured first on the guiding-center reference, as a run does.
+     */
+    public static RunSchedule schedule(Case c) {
+        Plan p = new Plan(new ResolvedCase(c));
+        if (c.durationUnit() == DurationUnit.BOUNCES) {
+            p.measureBounce();
+        } else if (c.durationUnit() == DurationUnit.CROSSINGS) {
+            p.checkSheet();
+            p.measureSheetExit();
+        }
+        p.schedule();
+        double[] dts = new double[CONVERGENCE_LEVELS];
+        long[] steps = new long[CONVERGENCE_LEVELS];
+        for (int l = 0; l < CONVERGENCE_LEVELS; l++) {
+            dts[l] = p.dt / (1 << l);
+            steps[l] = p.convN << l;
+        }
+        return new RunSchedule(p.rc, p.x0, p.u0, p.dt, p.n, p.tEnd, p.bounce, dts, steps);
+    }
+
     /** One case: its setup, its jobs and their result slots. */
     static final class Plan {
         final ResolvedCase rc;

@@ -1,0 +1,204 @@
+package org.twinorbit.harness.export;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.twinorbit.fields.Field;
+import org.twinorbit.fields.FieldProvider;
+import org.twinorbit.fields.Fields;
+import org.twinorbit.fields.ParameterSpec;
+import org.twinorbit.harness.cases.Case;
+import org.twinorbit.harness.cases.ResolvedCase;
+import org.twinorbit.harness.report.AtomicFiles;
+import org.twinorbit.harness.report.ResultJson;
+import org.twinorbit.harness.report.ToolInfo;
+import org.twinorbit.harness.run.CaseRunner;
+import org.twinorbit.harness.run.RunSchedule;
+import org.twinorbit.shared.FieldSample;
+
+/**
+ * The exported form of a case, for codes that cannot load this jar. One directory per case:
+ * <pre>
+ * manifest.json       schema "twinorbit-case-export", schema_version; tool {name, version,
+ *                     git_commit}; case {name, field, field_parameters, species, mass_kg,
+ *                     charge_c, energy_ev, pitch_deg, eps, rho_m, gyro_period_s, phases,
+ *                     duration, duration_unit, end_time_s, bounce_period_s}; time_origin_s (0);
+ *                     initial_states (file name); runs [{purpose: main | convergence, level,
+ *                     dt_s, steps, phases (list of phase indices), output_every_steps,
+ *                     trajectory_file}]; trajectory_columns; field_card, field_card_table
+ * initial-states.csv  phase, x_m, y_m, z_m, ux_m_per_s, uy_m_per_s, uz_m_per_s: every gyrophase
+ *                     at t = 0, u = γv (the state a pusher starts from; a leapfrog scheme offsets
+ *                     its own half step)
+ * field-card.json     the field in words: name, description, parameters [{name, value, unit,
+ *                     description}], length_meaning, l_m, domain, invariants; the sample table's
+ *                     file and columns
+ * field-card.csv      the columns of {@code twinorbit probe} at {@value #CARD_SIDE}³ points around
+ *                     the start (±{@value #CARD_HALF_WIDTH_RHO} ρ0 a side), so an outside field
+ *                     implementation can test itself point by point
+ * </pre>
+ * A trajectory written back (one file per run, columns {@link #TRAJECTORY_COLUMNS}, a row per
+ * phase and sample, time increasing within each phase, the first sample at t = 0) is what a
+ * scorer reads. All quantities SI.
+ */
+public final class CaseExport {
+
+    /** The layout version: raised when a file or a key changes meaning. */
+    public static final int SCHEMA_VERSION = 1;
+    /** Points per side of the field card's sample grid (64 points). */
+    static final int CARD_SIDE = 4;
+    /** Half-width of the sample grid, in initial gyroradii. */
+    static final double CARD_HALF_WIDTH_RHO = 5;
+    /** Columns of a trajectory file written back by an outside code. */
+    public static final List<String> TRAJECTORY_COLUMNS = List.of("phase", "t_s", "x_m", "y_m", "z_m", "ux_m_per_s",
+            "uy_m_per_s", "uz_m_per_s");
+
+    private CaseExport() {}
+
+    /** Writes the four files of case c into dir, asking for one sample every {@code every} steps. */
+    public static void write(Case c, int every, Path dir) {
+        RunSchedule s = CaseRunner.schedule(c);
+        ResolvedCase rc = s.resolved();
+        AtomicFiles.write(dir.resolve("initial-states.csv"), initialStates(s));
+        AtomicFiles.write(dir.resolve("field-card.csv"), cardTable(rc));
+        AtomicFiles.write(dir.resolve("field-card.json"), ResultJson.write(ToolInfo.stamped(card(rc))));
+        AtomicFiles.write(dir.resolve("manifest.json"), ResultJson.write(ToolInfo.stamped(manifest(s, every))));
+    }
+
+    /** index.json beside the case directories of an exported suite. */
+    public static void writeIndex(List<String> caseNames, Path dir) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("schema", "twinorbit-case-export-index");
+        m.put("schema_version", SCHEMA_VERSION);
+        m.put("cases", caseNames);
+        AtomicFiles.write(dir.resolve("index.json"), ResultJson.write(ToolInfo.stamped(m)));
+    }
+
+    static String initialStates(RunSchedule s) {
+        StringBuilder sb = new StringBuilder("phase,x_m,y_m,z_m,ux_m_per_s,uy_m_per_s,uz_m_per_s\n");
+        for (int k = 0; k < s.x0().length; k++) {
+            double[] x = s.x0()[k];
+            double[] u = s.u0()[k];
+            sb.append(k).append(',').append(x[0]).append(',').append(x[1]).append(',').append(x[2]).append(',')
+                    .append(u[0]).append(',').append(u[1]).append(',').append(u[2]).append('\n');
+        }
+        return sb.toString();
+    }
+
+    static Map<String, Object> manifest(RunSchedule s, int every) {
+        ResolvedCase rc = s.resolved();
+        Case c = rc.spec();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("schema", "twinorbit-case-export");
+        m.put("schema_version", SCHEMA_VERSION);
+        Map<String, Object> k = new LinkedHashMap<>();
+        k.put("name", c.name());
+        k.put("field", c.field());
+        k.put("field_parameters", new LinkedHashMap<>(c.fieldParameters()));
+        k.put("species", c.species().name());
+        k.put("mass_kg", c.species().mass());
+        k.put("charge_c", c.species().charge());
+        k.put("energy_ev", rc.energyEv());
+        k.put("pitch_deg", c.pitchDeg());
+        k.put("eps", finite(rc.eps()));
+        k.put("rho_m", rc.rho0());
+        k.put("gyro_period_s", rc.gyroPeriod());
+        k.put("phases", c.phases());
+        k.put("duration", c.duration());
+        k.put("duration_unit", c.durationUnit().label());
+        k.put("end_time_s", s.endTime());
+        k.put("bounce_period_s", finite(s.bouncePeriod()));
+        m.put("case", k);
+        m.put("time_origin_s", 0.0);
+        m.put("initial_states", "initial-states.csv");
+        List<Object> runs = new ArrayList<>();
+        List<Integer> all = new ArrayList<>();
+        for (int i = 0; i < s.x0().length; i++) {
+            all.add(i);
+        }
+        runs.add(run("main", -1, s.dt(), s.steps(), all, every, "trajectory-main.csv"));
+        for (int l = 0; l < s.convergenceDt().length; l++) {
+            // the sweep compares end positions: the last sample is what matters, every step is asked
+            // for at the coarsest level only to keep the files small
+            runs.add(run("convergence", l, s.convergenceDt()[l], s.convergenceSteps()[l], List.of(0),
+                    (int) (s.convergenceSteps()[l] / s.convergenceSteps()[0]), "trajectory-convergence-" + l + ".csv"));
+        }
+        m.put("runs", runs);
+        m.put("trajectory_columns", TRAJECTORY_COLUMNS);
+        m.put("field_card", "field-card.json");
+        m.put("field_card_table", "field-card.csv");
+        return m;
+    }
+
+    private static Map<String, Object> run(String purpose, int level, double dt, long steps, List<Integer> phases,
+                                           int every, String file) {
+        Map<String, Object> r = new LinkedHashMap<>();
+        r.put("purpose", purpose);
+        r.put("level", level < 0 ? null : level);
+        r.put("dt_s", dt);
+        r.put("steps", steps);
+        r.put("phases", phases);
+        r.put("output_every_steps", every);
+        r.put("trajectory_file", file);
+        return r;
+    }
+
+    static Map<String, Object> card(ResolvedCase rc) {
+        Case c = rc.spec();
+        FieldProvider p = Fields.provider(c.field());
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("schema", "twinorbit-field-card");
+        m.put("schema_version", SCHEMA_VERSION);
+        m.put("field", p.name());
+        m.put("description", p.description());
+        List<Object> params = new ArrayList<>();
+        for (ParameterSpec ps : p.parameters()) {
+            Map<String, Object> o = new LinkedHashMap<>();
+            o.put("name", ps.name());
+            o.put("value", c.fieldParameters().getOrDefault(ps.name(), ps.defaultValue()));
+            o.put("unit", ps.unit());
+            o.put("description", ps.description());
+            params.add(o);
+        }
+        m.put("parameters", params);
+        m.put("length_meaning", p.lengthMeaning());
+        m.put("l_m", finite(rc.field().length()));
+        m.put("domain", rc.field().domainMeaning());
+        m.put("invariants", p.invariantsMeaning());
+        m.put("table", "field-card.csv");
+        List<String> cols = new ArrayList<>(List.of("x_m", "y_m", "z_m", "t_s"));
+        cols.addAll(FieldProbe.COLUMNS);
+        m.put("table_columns", cols);
+        return m;
+    }
+
+    /** The probe columns on a grid of CARD_SIDE³ points centred on the start, at t = 0. */
+    static String cardTable(ResolvedCase rc) {
+        Field f = rc.field();
+        StringBuilder sb = new StringBuilder("x_m,y_m,z_m,t_s," + String.join(",", FieldProbe.COLUMNS) + "\n");
+        double[] x0 = {rc.start().x(), rc.start().y(), rc.start().z()};
+        double h = CARD_HALF_WIDTH_RHO * rc.rho0();
+        FieldSample s = new FieldSample();
+        for (int i = 0; i < CARD_SIDE; i++) {
+            for (int j = 0; j < CARD_SIDE; j++) {
+                for (int k = 0; k < CARD_SIDE; k++) {
+                    double[] p = {x0[0] + h * (2.0 * i / (CARD_SIDE - 1) - 1), x0[1] + h * (2.0 * j / (CARD_SIDE - 1) - 1),
+                        x0[2] + h * (2.0 * k / (CARD_SIDE - 1) - 1), 0};
+                    double[] v = FieldProbe.values(f, p, s);
+                    sb.append(p[0]).append(',').append(p[1]).append(',').append(p[2]).append(',').append(p[3]);
+                    for (int c = 0; c < v.length; c++) {
+                        boolean flag = c == v.length - 1;
+                        sb.append(',').append(flag ? (v[c] == 1 ? "true" : "false") : Double.isFinite(v[c]) ? Double.toString(v[c]) : "");
+                    }
+                    sb.append('\n');
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    private static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}
