@@ -33,10 +33,6 @@ public final class ExportCommand implements Callable<Integer> {
     @Option(names = "--suite", paramLabel = "WHICH", description = "Export every case of the suite instead: quick or full.")
     String suite;
 
-    @Option(names = "--every", paramLabel = "N", defaultValue = "1",
-            description = "Ask the outside code for one trajectory sample every N steps (default ${DEFAULT-VALUE}: every step).")
-    int every;
-
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Directory to write into (one "
             + "subdirectory per case).")
     Path out;
@@ -46,9 +42,6 @@ public final class ExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (every < 1) {
-            throw new BadInputException("--every must be at least 1 step, got " + every);
-        }
         List<Case> cases = new ArrayList<>();
         if (suite != null) {
             if (!suite.equals("quick") && !suite.equals("full")) {
@@ -64,7 +57,7 @@ public final class ExportCommand implements Callable<Integer> {
         for (Case c : cases) {
             Path dir = out.resolve(c.name());
             OutputDirectory.prepare(dir);
-            CaseExport.write(c, every, dir);
+            CaseExport.write(c, dir);
             names.add(c.name());
         }
         if (suite != null) {

@@ -24,10 +24,14 @@ import org.twinorbit.shared.FieldSample;
  * manifest.json       schema "twinorbit-case-export", schema_version; tool {name, version,
  *                     git_commit}; case {name, field, field_parameters, species, mass_kg,
  *                     charge_c, energy_ev, pitch_deg, eps, rho_m, gyro_period_s, phases,
- *                     duration, duration_unit, end_time_s, bounce_period_s}; time_origin_s (0);
+ *                     duration, duration_unit, end_time_s, bounce_period_s}; definition (the
+ *                     case in the keys of a case file, for the scorer); time_origin_s (0);
  *                     initial_states (file name); runs [{purpose: main | convergence, level,
- *                     dt_s, steps, phases (list of phase indices), output_every_steps,
- *                     trajectory_file}]; trajectory_columns; field_card, field_card_table
+ *                     dt_s, steps, phases (list of phase indices), output_every_steps (1: every
+ *                     step, the first sample the initial state), trajectory_file}]: the main run
+ *                     of every phase, and levels 1–3 of the convergence sweep (dt/2, dt/4,
+ *                     dt/8) for phase 0 — level 0 is the main run's phase 0;
+ *                     trajectory_columns; field_card, field_card_table
  * initial-states.csv  phase, x_m, y_m, z_m, ux_m_per_s, uy_m_per_s, uz_m_per_s: every gyrophase
  *                     at t = 0, u = γv (the state a pusher starts from; a leapfrog scheme offsets
  *                     its own half step)
@@ -56,14 +60,14 @@ public final class CaseExport {
 
     private CaseExport() {}
 
-    /** Writes the four files of case c into dir, asking for one sample every {@code every} steps. */
-    public static void write(Case c, int every, Path dir) {
+    /** Writes the four files of case c into dir. */
+    public static void write(Case c, Path dir) {
         RunSchedule s = CaseRunner.schedule(c);
         ResolvedCase rc = s.resolved();
         AtomicFiles.write(dir.resolve("initial-states.csv"), initialStates(s));
         AtomicFiles.write(dir.resolve("field-card.csv"), cardTable(rc));
         AtomicFiles.write(dir.resolve("field-card.json"), ResultJson.write(ToolInfo.stamped(card(rc))));
-        AtomicFiles.write(dir.resolve("manifest.json"), ResultJson.write(ToolInfo.stamped(manifest(s, every))));
+        AtomicFiles.write(dir.resolve("manifest.json"), ResultJson.write(ToolInfo.stamped(manifest(s))));
     }
 
     /** index.json beside the case directories of an exported suite. */
@@ -86,7 +90,7 @@ public final class CaseExport {
         return sb.toString();
     }
 
-    static Map<String, Object> manifest(RunSchedule s, int every) {
+    static Map<String, Object> manifest(RunSchedule s) {
         ResolvedCase rc = s.resolved();
         Case c = rc.spec();
         Map<String, Object> m = new LinkedHashMap<>();
@@ -110,6 +114,7 @@ public final class CaseExport {
         k.put("end_time_s", s.endTime());
         k.put("bounce_period_s", finite(s.bouncePeriod()));
         m.put("case", k);
+        m.put("definition", definition(c));
         m.put("time_origin_s", 0.0);
         m.put("initial_states", "initial-states.csv");
         List<Object> runs = new ArrayList<>();
@@ -117,12 +122,11 @@ public final class CaseExport {
         for (int i = 0; i < s.x0().length; i++) {
             all.add(i);
         }
-        runs.add(run("main", -1, s.dt(), s.steps(), all, every, "trajectory-main.csv"));
-        for (int l = 0; l < s.convergenceDt().length; l++) {
-            // the sweep compares end positions: the last sample is what matters, every step is asked
-            // for at the coarsest level only to keep the files small
+        runs.add(run("main", -1, s.dt(), s.steps(), all, "trajectory-main.csv"));
+        // level 0 of the sweep is phase 0 of the main run at the same step: no file of its own
+        for (int l = 1; l < s.convergenceDt().length; l++) {
             runs.add(run("convergence", l, s.convergenceDt()[l], s.convergenceSteps()[l], List.of(0),
-                    (int) (s.convergenceSteps()[l] / s.convergenceSteps()[0]), "trajectory-convergence-" + l + ".csv"));
+                    "trajectory-convergence-" + l + ".csv"));
         }
         m.put("runs", runs);
         m.put("trajectory_columns", TRAJECTORY_COLUMNS);
@@ -132,16 +136,45 @@ public final class CaseExport {
     }
 
     private static Map<String, Object> run(String purpose, int level, double dt, long steps, List<Integer> phases,
-                                           int every, String file) {
+                                           String file) {
         Map<String, Object> r = new LinkedHashMap<>();
         r.put("purpose", purpose);
         r.put("level", level < 0 ? null : level);
         r.put("dt_s", dt);
         r.put("steps", steps);
         r.put("phases", phases);
-        r.put("output_every_steps", every);
+        r.put("output_every_steps", 1);
         r.put("trajectory_file", file);
         return r;
+    }
+
+    /**
+     * The case in the keys of a case file ({@code run --case}), so that a scorer rebuilds exactly
+     * this case whatever the defaults of its own version are.
+     */
+    static Map<String, Object> definition(Case c) {
+        Map<String, Object> d = new LinkedHashMap<>();
+        d.put("name", c.name());
+        d.put("field", c.field());
+        d.put("field-parameters", new LinkedHashMap<>(c.fieldParameters()));
+        d.put("species", c.species().name().startsWith("custom(") ? c.species().mass() + "," + c.species().charge()
+                : c.species().name());
+        d.put("start", c.start() == null ? null : List.of(c.start().x(), c.start().y(), c.start().z()));
+        if (c.eps() != null) {
+            d.put("eps", c.eps());
+        } else {
+            d.put("energy", c.energyEv());
+        }
+        d.put("pitch", c.pitchDeg());
+        d.put("phases", c.phases());
+        d.put("duration", c.duration());
+        d.put("duration-unit", c.durationUnit().label());
+        d.put("steps-per-gyro", c.stepsPerGyro());
+        d.put("gc-integrators", c.gcIntegrators().isEmpty() ? List.of("none") : c.gcIntegrators());
+        d.put("gc-step", c.gcStepGyro());
+        d.put("gc-start", c.gcStart().label());
+        d.put("reference-rtol", c.referenceRtol());
+        return d;
     }
 
     static Map<String, Object> card(ResolvedCase rc) {

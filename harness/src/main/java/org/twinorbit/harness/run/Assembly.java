@@ -116,7 +116,8 @@ final class Assembly {
             }
             rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, muFrom, inv, cls, refCls,
                     order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall,
-                    new Diagnostics(runaway, halves[0], halves[1], localOrders(dts, errs, convSelf))));
+                    new Diagnostics(runaway, halves[0], halves[1], localOrders(dts, errs, convSelf),
+                            p.pushers.get(i).order(), p.pushers.get(i).properties())));
         }
 
         // guiding-center rows: the ensemble shares one guiding center, so one run stands for all phases
@@ -152,7 +153,8 @@ final class Assembly {
                     new LinkedHashMap<>(),
                     cls, refCls, order(dts, errs, gcSelf), dts, errs, r.outcome().steps(),
                     r.outcome().fieldEvaluations(), wall, new Diagnostics(Runaway.guidingCenter(tr, refTr, p.speed),
-                            Double.NaN, Double.NaN, localOrders(dts, errs, gcSelf))));
+                            Double.NaN, Double.NaN, localOrders(dts, errs, gcSelf), p.gcs.get(gi).order(),
+                            p.gcs.get(gi).properties())));
         }
 
         // model error: guiding-center reference against the gyro-averaged full-orbit reference

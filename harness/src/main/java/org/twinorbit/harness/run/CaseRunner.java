@@ -66,14 +66,29 @@ public final class CaseRunner {
 
     private final int threads;
     private final boolean quiet;
+    /** Pushers given as instances (not by name), run beside the case's named ones. */
+    private final List<FullOrbitPusher> instances;
 
     /** @param threads worker threads (≥ 1) @param quiet no progress bar */
     public CaseRunner(int threads, boolean quiet) {
+        this(threads, quiet, List.of());
+    }
+
+    private CaseRunner(int threads, boolean quiet, List<FullOrbitPusher> instances) {
         if (threads < 1) {
             throw new IllegalArgumentException("--threads: must be at least 1, got " + threads);
         }
         this.threads = threads;
         this.quiet = quiet;
+        this.instances = List.copyOf(instances);
+    }
+
+    /**
+     * A runner that also runs these pusher instances in every case, after the case's named
+     * pushers: a pusher that is not registered (a test's, or one replaying a trajectory file).
+     */
+    public CaseRunner with(List<FullOrbitPusher> pushers) {
+        return new CaseRunner(threads, quiet, pushers);
     }
 
     /** Runs one case. */
@@ -94,7 +109,7 @@ public final class CaseRunner {
     public List<CaseResult> run(List<Case> cases, java.util.function.Consumer<CaseResult> onCase) {
         List<Plan> plans = new ArrayList<>();
         for (Case c : cases) {
-            plans.add(new Plan(new ResolvedCase(c)));
+            plans.add(new Plan(new ResolvedCase(c), instances));
         }
         List<Parallel.Job> pre = new ArrayList<>();
         for (Plan p : plans) {
@@ -139,7 +154,7 @@ public final class CaseRunner {
      * bounces or crossings is measured first on the guiding-center reference, as a run does.
      */
     public static RunSchedule schedule(Case c) {
-        Plan p = new Plan(new ResolvedCase(c));
+        Plan p = new Plan(new ResolvedCase(c), List.of());
         if (c.durationUnit() == DurationUnit.BOUNCES) {
             p.measureBounce();
         } else if (c.durationUnit() == DurationUnit.CROSSINGS) {
@@ -196,12 +211,13 @@ public final class CaseRunner {
         GuidingCenterRecord[] gcMatched;
         GuidingCenterRecord gcTight;
 
-        Plan(ResolvedCase rc) {
+        Plan(ResolvedCase rc, List<FullOrbitPusher> instances) {
             this.rc = rc;
             this.c = rc.spec();
             for (String name : c.pushers()) {
                 pushers.add(Registry.pusher(name));
             }
+            pushers.addAll(instances);
             for (String name : c.gcIntegrators()) {
                 gcs.add(Registry.guidingCenter(name));
             }

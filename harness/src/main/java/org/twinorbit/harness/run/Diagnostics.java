@@ -12,9 +12,13 @@ package org.twinorbit.harness.run;
  * @param localOrders      orders between successive steps of the convergence sweep, over the
  *                         points that are neither reference- nor round-off-limited; empty when
  *                         fewer than three such points
+ * @param declaredOrder    the order the integrator declares; 0 for the model row
+ * @param properties       the properties it declares ("time-reversible", "relativistic", ...)
  */
-public record Diagnostics(double runaway, double energyFirstHalf, double energySecondHalf, double[] localOrders) {
+public record Diagnostics(double runaway, double energyFirstHalf, double energySecondHalf, double[] localOrders,
+                          int declaredOrder, java.util.Set<String> properties) {
 
     /** No facts (the model row). */
-    public static final Diagnostics NONE = new Diagnostics(Double.NaN, Double.NaN, Double.NaN, new double[0]);
+    public static final Diagnostics NONE = new Diagnostics(Double.NaN, Double.NaN, Double.NaN, new double[0], 0,
+            java.util.Set.of());
 }

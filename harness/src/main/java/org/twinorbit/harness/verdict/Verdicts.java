@@ -9,7 +9,6 @@ import org.twinorbit.harness.Format;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.Diagnostics;
 import org.twinorbit.harness.run.ReferenceSummary;
-import org.twinorbit.harness.run.Registry;
 import org.twinorbit.harness.run.ResultRow;
 
 /**
@@ -59,11 +58,9 @@ public final class Verdicts {
 
     static List<Finding> findings(ResultRow row, CaseResult r) {
         boolean fullOrbit = row.model().equals("full-orbit");
-        int declared = fullOrbit ? Registry.pusher(row.integrator()).order()
-                : Registry.guidingCenter(row.integrator()).order();
-        Set<String> properties = fullOrbit ? Registry.pusher(row.integrator()).properties()
-                : Registry.guidingCenter(row.integrator()).properties();
         Diagnostics d = row.diagnostics();
+        int declared = d.declaredOrder();
+        Set<String> properties = d.properties();
         List<Finding> f = new ArrayList<>();
         if (!row.status().equals("ok") && !row.status().equals("lost")) {
             f.add(new Finding(Check.STABLE, true, row.status() + " at "

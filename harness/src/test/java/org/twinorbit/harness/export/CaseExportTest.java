@@ -64,7 +64,7 @@ class CaseExportTest {
 
     @Test
     void runsSpanTheEndTimeAndTheSweepHalvesTheStep() throws IOException {
-        TestCommandLine.succeeded("export", "--field", "gradient", "--eps", "0.01", "--duration", "10", "--every", "4",
+        TestCommandLine.succeeded("export", "--field", "gradient", "--eps", "0.01", "--duration", "10",
                 "--out", tmp.toString());
         JsonNode m = JSON.readTree(tmp.resolve("gradient-proton").resolve("manifest.json").toFile());
         JsonNode runs = m.get("runs");
@@ -72,12 +72,14 @@ class CaseExportTest {
         assertEquals("main", main.get("purpose").asText());
         double end = m.get("case").get("end_time_s").asDouble();
         assertEquals(end, main.get("dt_s").asDouble() * main.get("steps").asLong(), 1e-12 * end);
-        assertEquals(4, main.get("output_every_steps").asInt());
+        assertEquals(1, main.get("output_every_steps").asInt());
+        assertEquals(4, runs.size(), "main and sweep levels 1-3");
         double span = runs.get(1).get("dt_s").asDouble() * runs.get(1).get("steps").asLong();
         for (int l = 1; l < runs.size(); l++) {
             JsonNode r = runs.get(l);
             assertEquals("convergence", r.get("purpose").asText());
-            assertEquals(main.get("dt_s").asDouble() / (1 << (l - 1)), r.get("dt_s").asDouble(), 1e-15 * end);
+            assertEquals(l, r.get("level").asInt());
+            assertEquals(main.get("dt_s").asDouble() / (1 << l), r.get("dt_s").asDouble(), 1e-15 * end);
             assertEquals(span, r.get("dt_s").asDouble() * r.get("steps").asLong(), 1e-12 * span);
         }
     }
@@ -120,10 +122,6 @@ class CaseExportTest {
         for (JsonNode name : index.get("cases")) {
             assertTrue(Files.exists(tmp.resolve(name.asText()).resolve("manifest.json")), name.asText());
         }
-        TestCommandLine.Outcome every = TestCommandLine.exec("export", "--field", "mirror", "--every", "0", "--out",
-                tmp.resolve("x").toString());
-        assertEquals(2, every.code());
-        assertTrue(every.err().contains("--every"), every.err());
         TestCommandLine.Outcome suite = TestCommandLine.exec("export", "--suite", "medium", "--out", tmp.toString());
         assertEquals(2, suite.code());
         assertTrue(suite.err().contains("allowed: quick, full"), suite.err());
