@@ -64,8 +64,8 @@ public final class ExportCommand implements Callable<Integer> {
             CaseExport.writeIndex(names, out);
         }
         pw.println("wrote " + cases.size() + " case" + (cases.size() == 1 ? "" : "s") + " into " + out
-                + (cases.size() == 1 ? "/" + names.get(0) : "") + ": manifest.json, initial-states.csv, field-card.json, "
-                + "field-card.csv");
+                + (cases.size() == 1 ? "/" + names.get(0) : "") + ": manifest.json, case.csv, runs.csv, initial-states.csv, "
+                + "field-card.json, field-card.csv");
         pw.flush();
         return 0;
     }

@@ -32,6 +32,10 @@ import org.twinorbit.shared.FieldSample;
  *                     of every phase, and levels 1–3 of the convergence sweep (dt/2, dt/4,
  *                     dt/8) for phase 0 — level 0 is the main run's phase 0;
  *                     trajectory_columns; field_card, field_card_table
+ * case.csv            key,value,unit: field, mass, charge, field.NAME for each parameter (the
+ *                     same facts for readers without JSON)
+ * runs.csv            purpose,level,dt_s,steps,phases,trajectory_file: the runs of the manifest,
+ *                     phases space-separated
  * initial-states.csv  phase, x_m, y_m, z_m, ux_m_per_s, uy_m_per_s, uz_m_per_s: every gyrophase
  *                     at t = 0, u = γv (the state a pusher starts from; a leapfrog scheme offsets
  *                     its own half step)
@@ -65,6 +69,8 @@ public final class CaseExport {
         RunSchedule s = CaseRunner.schedule(c);
         ResolvedCase rc = s.resolved();
         AtomicFiles.write(dir.resolve("initial-states.csv"), initialStates(s));
+        AtomicFiles.write(dir.resolve("case.csv"), caseTable(rc));
+        AtomicFiles.write(dir.resolve("runs.csv"), runTable(s));
         AtomicFiles.write(dir.resolve("field-card.csv"), cardTable(rc));
         AtomicFiles.write(dir.resolve("field-card.json"), ResultJson.write(ToolInfo.stamped(card(rc))));
         AtomicFiles.write(dir.resolve("manifest.json"), ResultJson.write(ToolInfo.stamped(manifest(s))));
@@ -86,6 +92,37 @@ public final class CaseExport {
             double[] u = s.u0()[k];
             sb.append(k).append(',').append(x[0]).append(',').append(x[1]).append(',').append(x[2]).append(',')
                     .append(u[0]).append(',').append(u[1]).append(',').append(u[2]).append('\n');
+        }
+        return sb.toString();
+    }
+
+    /** key,value,unit rows: species, field and its parameters, for readers without JSON. */
+    static String caseTable(ResolvedCase rc) {
+        Case c = rc.spec();
+        StringBuilder sb = new StringBuilder("key,value,unit\n");
+        sb.append("field,").append(c.field()).append(",\n");
+        sb.append("mass,").append(c.species().mass()).append(",kg\n");
+        sb.append("charge,").append(c.species().charge()).append(",C\n");
+        for (ParameterSpec ps : Fields.provider(c.field()).parameters()) {
+            sb.append("field.").append(ps.name()).append(',')
+                    .append(c.fieldParameters().getOrDefault(ps.name(), ps.defaultValue())).append(',').append(ps.unit())
+                    .append('\n');
+        }
+        return sb.toString();
+    }
+
+    /** The runs of the manifest as CSV: purpose, level, dt_s, steps, phases (space-separated), trajectory_file. */
+    static String runTable(RunSchedule s) {
+        StringBuilder sb = new StringBuilder("purpose,level,dt_s,steps,phases,trajectory_file\n");
+        StringBuilder all = new StringBuilder();
+        for (int k = 0; k < s.x0().length; k++) {
+            all.append(k == 0 ? "" : " ").append(k);
+        }
+        sb.append("main,0,").append(s.dt()).append(',').append(s.steps()).append(',').append(all)
+                .append(",trajectory-main.csv\n");
+        for (int l = 1; l < s.convergenceDt().length; l++) {
+            sb.append("convergence,").append(l).append(',').append(s.convergenceDt()[l]).append(',')
+                    .append(s.convergenceSteps()[l]).append(",0,trajectory-convergence-").append(l).append(".csv\n");
         }
         return sb.toString();
     }
