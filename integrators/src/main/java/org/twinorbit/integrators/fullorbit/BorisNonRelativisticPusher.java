@@ -28,7 +28,7 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
     }
 
     @Override
-    LeapfrogUpdate newUpdate(boolean electric) {
+    protected LeapfrogUpdate newUpdate(boolean electric) {
         return new Update(electric);
     }
 
@@ -39,12 +39,12 @@ public final class BorisNonRelativisticPusher extends LeapfrogPusher {
         }
 
         @Override
-        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+        protected double rotationInverseGamma(double u2, double uDotTau, double tau2) {
             return 1.0;
         }
 
         @Override
-        double push(FieldSample f, double h) {
+        protected double push(FieldSample f, double h) {
             if (electric) {
                 ux += h * f.ex;
                 uy += h * f.ey;

@@ -29,7 +29,7 @@ public final class BorisPusher extends LeapfrogPusher {
     }
 
     @Override
-    LeapfrogUpdate newUpdate(boolean electric) {
+    protected LeapfrogUpdate newUpdate(boolean electric) {
         return new Update(electric);
     }
 
@@ -41,12 +41,12 @@ public final class BorisPusher extends LeapfrogPusher {
 
         /** Boris rotates at the γ of u⁻, which the rotation leaves unchanged. */
         @Override
-        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+        protected double rotationInverseGamma(double u2, double uDotTau, double tau2) {
             return 1.0 / Math.sqrt(1.0 + u2 * INV_C2);
         }
 
         @Override
-        double push(FieldSample f, double h) {
+        protected double push(FieldSample f, double h) {
             if (electric) {
                 ux += h * f.ex;
                 uy += h * f.ey;

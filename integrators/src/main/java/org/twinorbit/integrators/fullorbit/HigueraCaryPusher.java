@@ -31,7 +31,7 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
     }
 
     @Override
-    LeapfrogUpdate newUpdate(boolean electric) {
+    protected LeapfrogUpdate newUpdate(boolean electric) {
         return new Update(electric);
     }
 
@@ -43,7 +43,7 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
 
         /** Higuera &amp; Cary rotate at the γ solved from u⁻ and τ = h B (their eq. for γ_new). */
         @Override
-        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+        protected double rotationInverseGamma(double u2, double uDotTau, double tau2) {
             return implicitInverseGamma(u2, uDotTau, tau2);
         }
 
@@ -54,7 +54,7 @@ public final class HigueraCaryPusher extends LeapfrogPusher {
         }
 
         @Override
-        double push(FieldSample f, double h) {
+        protected double push(FieldSample f, double h) {
             if (electric) {
                 kick(f, h);
             }

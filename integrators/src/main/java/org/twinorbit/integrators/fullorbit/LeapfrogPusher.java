@@ -5,13 +5,18 @@ import org.twinorbit.fields.Field;
 import org.twinorbit.shared.Species;
 
 /**
- * A member of the leapfrog family: supplies only its velocity update; the stepping loops are
- * {@link LeapfrogStepper} and {@link LeapfrogEnsemble}. Leapfrog schemes are second order.
+ * A member of the leapfrog family — the extension point for a new leapfrog scheme, inside this
+ * package or outside it: supply only the velocity update ({@link LeapfrogUpdate}); the stepping
+ * loops (field evaluation, position drift, domain and finiteness checks, the half-step start
+ * and the synchronised velocity) are written once for all members. Leapfrog schemes are second
+ * order. Implement {@link #name()}, {@link #description()} and {@link #properties()} too, and
+ * list the class in {@code META-INF/services/org.twinorbit.integrators.fullorbit.FullOrbitPusher}
+ * to make it selectable by name (examples/java-pusher shows a complete one).
  */
-abstract class LeapfrogPusher implements FullOrbitPusher {
+public abstract class LeapfrogPusher implements FullOrbitPusher {
 
     /** A fresh update for one loop. @param electric whether the field has an E anywhere */
-    abstract LeapfrogUpdate newUpdate(boolean electric);
+    protected abstract LeapfrogUpdate newUpdate(boolean electric);
 
     @Override
     public final int order() {

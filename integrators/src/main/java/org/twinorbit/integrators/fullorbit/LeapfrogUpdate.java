@@ -13,20 +13,25 @@ import org.twinorbit.shared.FieldSample;
  * as h = q Δt / (2m) (s C/kg): h E is the half electric kick (m/s) and h B the rotation
  * parameter Ω Δt / 2 of a non-relativistic particle. A negative h runs the scheme backwards.
  */
-abstract class LeapfrogUpdate {
+public abstract class LeapfrogUpdate {
 
     /** 1/c² (s²/m²). */
-    static final double INV_C2 = 1.0 / (Constants.C * Constants.C);
+    protected static final double INV_C2 = 1.0 / (Constants.C * Constants.C);
 
     /** The velocity being updated, u = γv (m/s). */
-    double ux, uy, uz;
+    protected double ux, uy, uz;
 
     /** False when the field has no E anywhere: every kick is skipped. */
-    final boolean electric;
+    protected final boolean electric;
     /** False for a scheme that sets γ = 1 (then u = v). */
-    final boolean relativistic;
+    protected final boolean relativistic;
 
-    LeapfrogUpdate(boolean electric, boolean relativistic) {
+    /**
+     * @param electric     whether the field has an E anywhere (pass on the argument of
+     *                     {@link LeapfrogPusher#newUpdate})
+     * @param relativistic false for a scheme that sets γ = 1
+     */
+    protected LeapfrogUpdate(boolean electric, boolean relativistic) {
         this.electric = electric;
         this.relativistic = relativistic;
     }
@@ -37,7 +42,7 @@ abstract class LeapfrogUpdate {
      * @param h q Δt / (2m) (s C/kg)
      * @return 1/γ of the new u, by which the position drift multiplies u
      */
-    abstract double push(FieldSample f, double h);
+    protected abstract double push(FieldSample f, double h);
 
     /**
      * 1/γ at which the scheme rotates a vector u in the magnetic field, from quantities a
@@ -47,7 +52,7 @@ abstract class LeapfrogUpdate {
      * @param uDotTau u·τ (m/s), τ = h B
      * @param tau2    |τ|²
      */
-    abstract double rotationInverseGamma(double u2, double uDotTau, double tau2);
+    protected abstract double rotationInverseGamma(double u2, double uDotTau, double tau2);
 
     /**
      * Advances u from t − Δt/2 to t, synchronising it with the position: half the scheme's
@@ -145,7 +150,7 @@ abstract class LeapfrogUpdate {
     }
 
     /** 1/γ of the current u. */
-    final double inverseGamma() {
+    protected final double inverseGamma() {
         return 1.0 / Math.sqrt(1.0 + (ux * ux + uy * uy + uz * uz) * INV_C2);
     }
 
@@ -155,12 +160,12 @@ abstract class LeapfrogUpdate {
      *
      * @param tx rotation vector (dimensionless), the rotation is right-handed about −t
      */
-    final void rotate(double tx, double ty, double tz) {
+    protected final void rotate(double tx, double ty, double tz) {
         rotate(tx, ty, tz, 2.0 / (1.0 + tx * tx + ty * ty + tz * tz));
     }
 
     /** {@link #rotate(double, double, double)} with f = 2/(1 + |t|²) supplied by the caller. */
-    final void rotate(double tx, double ty, double tz, double f) {
+    protected final void rotate(double tx, double ty, double tz, double f) {
         double sx = f * tx, sy = f * ty, sz = f * tz;
         double px = ux + (uy * tz - uz * ty);
         double py = uy + (uz * tx - ux * tz);
@@ -174,7 +179,7 @@ abstract class LeapfrogUpdate {
      * Rotates u by half the angle of {@code rotate(t)}: tan(θ/4) = |t| / (1 + sqrt(1 + |t|²))
      * follows from tan(θ/2) = |t| by the half-angle formula (common practice).
      */
-    final void rotateHalf(double tx, double ty, double tz, int sign) {
+    protected final void rotateHalf(double tx, double ty, double tz, int sign) {
         double k = sign / (1.0 + Math.sqrt(1.0 + tx * tx + ty * ty + tz * tz));
         rotate(k * tx, k * ty, k * tz);
     }

@@ -28,7 +28,7 @@ public final class VayPusher extends LeapfrogPusher {
     }
 
     @Override
-    LeapfrogUpdate newUpdate(boolean electric) {
+    protected LeapfrogUpdate newUpdate(boolean electric) {
         return new Update(electric);
     }
 
@@ -40,12 +40,12 @@ public final class VayPusher extends LeapfrogPusher {
 
         /** In a pure magnetic field Vay's step is a rotation at the γ of u. */
         @Override
-        double rotationInverseGamma(double u2, double uDotTau, double tau2) {
+        protected double rotationInverseGamma(double u2, double uDotTau, double tau2) {
             return 1.0 / Math.sqrt(1.0 + u2 * INV_C2);
         }
 
         @Override
-        double push(FieldSample f, double h) {
+        protected double push(FieldSample f, double h) {
             double tx = h * f.bx, ty = h * f.by, tz = h * f.bz;
             double ig = inverseGamma();
             // u' = u + h (E + v×B) + h E, with v = u/γ the old velocity
