@@ -6,7 +6,7 @@ import org.twinorbit.harness.report.ToolInfo;
 /** The Markdown summary of a check, short enough for a pull-request comment. */
 public final class CheckMarkdown {
 
-    /** Differences listed at most; the JSON and JUnit files have all of them. */
+    /** Rows listed at most; the JSON and JUnit files have every difference. */
     static final int MAX_LISTED = 50;
 
     private CheckMarkdown() {}
@@ -30,20 +30,42 @@ public final class CheckMarkdown {
             sb.append("No differences.\n");
             return sb.toString();
         }
-        // failures first, so that a long list still shows them
-        List<Difference> sorted = d.stream().sorted((a, b) -> Boolean.compare(b.kind().fails(), a.kind().fails())).toList();
-        sb.append("| case | row | change | what | baseline | new | tolerance |\n");
-        sb.append("|---|---|---|---|---|---|---|\n");
-        for (Difference x : sorted.subList(0, Math.min(MAX_LISTED, sorted.size()))) {
-            sb.append("| ").append(x.caseName()).append(" | ").append(x.row()).append(" | ").append(x.kind().label())
-                    .append(" | ").append(x.what()).append(" | ").append(cell(x.baseline())).append(" | ")
-                    .append(cell(x.current())).append(" | ")
-                    .append(x.tolerance() == null ? "" : x.tolerance().describe()).append(" |\n");
+        // one line per row, failed rows first, its most telling difference shown: a metric with values
+        List<MeasuredRow> rows = r.rows().stream().filter(x -> !r.of(x).isEmpty())
+                .sorted((a, b) -> Boolean.compare(fails(r, b), fails(r, a))).toList();
+        sb.append("| case | row | result | first difference | baseline | new | tolerance | more |\n");
+        sb.append("|---|---|---|---|---|---|---|---|\n");
+        for (MeasuredRow row : rows.subList(0, Math.min(MAX_LISTED, rows.size()))) {
+            List<Difference> all = r.of(row);
+            List<Difference> shown = fails(r, row) ? all.stream().filter(x -> x.kind().fails()).toList() : all;
+            Difference x = shown.stream().filter(y -> y.tolerance() != null).findFirst().orElse(shown.get(0));
+            sb.append("| ").append(row.caseName()).append(" | ").append(row.row()).append(" | ")
+                    .append(fails(r, row) ? "FAIL" : "pass").append(" | ").append(x.kind().label()).append(' ')
+                    .append(x.what()).append(" | ").append(cell(x.baseline())).append(" | ").append(cell(x.current()))
+                    .append(" | ").append(x.tolerance() == null ? "" : x.tolerance().describe()).append(" | ")
+                    .append(summary(all, x)).append(" |\n");
         }
-        if (sorted.size() > MAX_LISTED) {
-            sb.append("\n… and ").append(sorted.size() - MAX_LISTED).append(" more (see the JSON or JUnit output).\n");
+        if (rows.size() > MAX_LISTED) {
+            sb.append("\n… and ").append(rows.size() - MAX_LISTED).append(" more rows (see the JSON or JUnit output).\n");
         }
         return sb.toString();
+    }
+
+    private static boolean fails(CheckResult r, MeasuredRow row) {
+        return r.of(row).stream().anyMatch(d -> d.kind().fails());
+    }
+
+    /** The row's other differences by kind, e.g. "22 regressions, 3 improvements". */
+    private static String summary(List<Difference> all, Difference shown) {
+        List<String> parts = new java.util.ArrayList<>();
+        for (Difference.Kind k : Difference.Kind.values()) {
+            long n = all.stream().filter(d -> d != shown && d.kind() == k).count();
+            if (n > 0) {
+                boolean noun = k == Difference.Kind.REGRESSION || k == Difference.Kind.IMPROVEMENT;
+                parts.add(n + " " + k.label() + (noun && n > 1 ? "s" : ""));
+            }
+        }
+        return String.join(", ", parts);
     }
 
     private static String cell(String s) {

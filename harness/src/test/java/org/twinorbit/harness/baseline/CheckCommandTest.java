@@ -81,7 +81,7 @@ class CheckCommandTest {
             System.clearProperty(PerturbableBorisPusher.PROPERTY);
         }
         assertEquals(1, o.code(), o.out() + o.err());
-        assertTrue(o.out().contains("FAIL") && o.out().contains("energy_error"), o.out());
+        assertTrue(o.out().contains("FAIL") && o.out().contains("| test-boris-perturbable | FAIL |"), o.out());
         Document doc = DocumentBuilderFactory.newInstance().newDocumentBuilder().parse(junit.toFile());
         assertEquals("testsuites", doc.getDocumentElement().getTagName());
         NodeList cases = doc.getElementsByTagName("testcase");
