@@ -88,7 +88,7 @@ public final class SuiteCommand implements Callable<Integer> {
     }
 
     /** The names, each checked against the registry. @throws IllegalArgumentException naming --pushers */
-    private static List<String> checked(List<String> names) {
+    static List<String> checked(List<String> names) {
         for (String n : names) {
             if (!Registry.pusherNames().contains(n)) {
                 throw new IllegalArgumentException("--pushers: unknown pusher '" + n + "'; allowed: "

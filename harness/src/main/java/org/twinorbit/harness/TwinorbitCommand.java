@@ -11,8 +11,8 @@ import picocli.CommandLine.Command;
             "Runs the same charged particles as full orbits and as guiding centers through the same",
             "fields, and measures how well each integrator and each model keeps the physics."},
         subcommands = {FieldsCommand.class, ProbeCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
+            org.twinorbit.harness.scan.ScanCommand.class, BaselineCommand.class, CheckCommand.class,
             ExportCommand.class, ScoreCommand.class,
-            org.twinorbit.harness.scan.ScanCommand.class,
             CommandLine.HelpCommand.class})
 public final class TwinorbitCommand implements Runnable {
 
@@ -29,6 +29,8 @@ public final class TwinorbitCommand implements Runnable {
         CommandLine cl = new CommandLine(new TwinorbitCommand());
         cl.setExecutionExceptionHandler(new UserErrorHandler());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // everything after the baseline's COMMAND belongs to that command, options included
+        cl.getSubcommands().get("baseline").setStopAtPositional(true);
         // help goes to stdout, usage errors to stderr: colours only when both are terminals
         boolean colour = Terminal.isTerminal(Terminal.STDOUT) && Terminal.isTerminal(Terminal.STDERR);
         cl.setColorScheme(CommandLine.Help.defaultColorScheme(colour ? CommandLine.Help.Ansi.AUTO

@@ -201,8 +201,18 @@ public final class ScanCommand implements Runnable {
         }
     }
 
+    /** The particle of {@code --species}. @throws IllegalArgumentException listing the allowed names */
+    public Species species() {
+        return Species.parse(species);
+    }
+
+    /** The worker threads of {@code --threads}. */
+    public int threads() {
+        return execution.threads();
+    }
+
     /** Checks every option and builds the scan; no orbit is computed here. */
-    ScanRequest.Built setup() {
+    public ScanRequest.Built setup() {
         ScanRequest q = new ScanRequest();
         q.field = field;
         q.parameters = new LinkedHashMap<>(params);
