@@ -12,7 +12,7 @@ import org.twinorbit.shared.Species;
 /** The field library: every {@link FieldProvider} on the class path, found by name. */
 public final class Fields {
 
-    /** The built-in fields in the order DESIGN.md lists them; user fields follow by name. */
+    /** The built-in fields in the order docs/design.md lists them; user fields follow by name. */
     private static final List<String> ORDER = List.of("uniform", "crossed", "gradient", "toroidal",
             "mirror", "dipole", "tokamak", "current-sheet", "shear", "ramp", "wave");
 

@@ -11,7 +11,7 @@ import org.twinorbit.shared.FieldSample;
 /**
  * The two fields with the longest hand-derived Jacobians (dipole, tokamak) once more, against
  * Commons Math automatic differentiation ({@link DerivativeStructure}; Rall, Automatic
- * Differentiation, 1981): B is written again from its definition in DESIGN.md, and AD gives its
+ * Differentiation, 1981): B is written again from its definition in docs/design.md, and AD gives its
  * derivatives to rounding, so the tolerance can be 1e-12 of |B|/ℓ + max|∂B| (a few dozen ulps of
  * the terms summed) instead of the 1e-9 that finite differences allow.
  */

@@ -9,7 +9,7 @@ import picocli.CommandLine;
  */
 final class UserErrorHandler implements CommandLine.IExecutionExceptionHandler {
 
-    /** Exit code for bad input (DESIGN.md "Command line"). */
+    /** Exit code for bad input (docs/design.md "Command line"). */
     static final int BAD_INPUT = 2;
 
     @Override

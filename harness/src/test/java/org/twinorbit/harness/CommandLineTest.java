@@ -71,7 +71,7 @@ class CommandLineTest {
                 o.err());
     }
 
-    /** ε = ρ0/L ≥ 1 from an energy is refused like --eps ≥ 1 (DESIGN.md bad-input rules). */
+    /** ε = ρ0/L ≥ 1 from an energy is refused like --eps ≥ 1 (docs/design.md bad-input rules). */
     @Test
     void energyGivingEpsAboveOneIsRefused() {
         // a 1 GeV proton in the 0.5 T, 1 m mirror has rho0 = 11.3 m, eps = 11

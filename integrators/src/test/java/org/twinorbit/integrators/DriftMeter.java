@@ -9,7 +9,7 @@ import org.twinorbit.shared.Species;
  * Measures a guiding-center drift over whole gyrations: between the first and the last time u_x
  * rises through zero (the same gyration phase), both located by cubic Hermite interpolation of
  * the synchronised states (u and du/dt for the time, x and v for the position), so that a
- * window of whole periods is used (DESIGN.md: a partial window biases the mean).
+ * window of whole periods is used (docs/design.md: a partial window biases the mean).
  */
 public final class DriftMeter {
 

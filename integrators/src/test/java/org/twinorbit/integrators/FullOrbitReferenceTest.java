@@ -89,7 +89,7 @@ class FullOrbitReferenceTest {
         assertTrue(r.evaluations() > 0);
     }
 
-    /** Leaving the domain stops the run as LOST at the crossing (DESIGN.md), located by the event. */
+    /** Leaving the domain stops the run as LOST at the crossing (docs/design.md), located by the event. */
     @Test
     void stopsAtTheDomainEdge() {
         FullOrbitReference.Result r = new FullOrbitReference(TestField.walled(1e-3, 1.0), P)

@@ -45,7 +45,7 @@ class GuidingCenterMapTest {
         assertEquals(x[0] + radius * ax, gc.position().x(), 1e-15 * radius + 1e-16);
         assertEquals(x[1] + radius * ay, gc.position().y(), 1e-15 * radius + 1e-16);
         assertEquals(x[2], gc.position().z(), 0);
-        // μ = p⊥²/(2mB) (definition, DESIGN.md)
+        // μ = p⊥²/(2mB) (definition, docs/design.md)
         assertEquals(s.mass() * uPerp * uPerp / (2 * b0), gc.mu(), 1e-15 * gc.mu());
         assertEquals(s.mass() * u[2], gc.parallelMomentum(), 1e-15 * s.mass() * u[2]);
     }
@@ -96,7 +96,7 @@ class GuidingCenterMapTest {
 
     @Test
     void epsilonGivesTheRequestedGyroradius() {
-        // ε = ρ0/L with ρ0 = p/(|q|B) (DESIGN.md, "What is measured")
+        // ε = ρ0/L with ρ0 = p/(|q|B) (docs/design.md, "What is measured")
         Field f = new GcShearTestField(0.7, 2.0, 0);
         InitialCondition ic = InitialCondition.ofEpsilon(f, Species.ALPHA, 0.03, 10, Vec3.ZERO);
         assertEquals(0.03, ic.gyroradius() / 2.0, 1e-13);
@@ -150,7 +150,7 @@ class GuidingCenterMapTest {
 
     @Test
     void firstOrderPlacementKeepsTheKineticEnergy() {
-        // DESIGN.md: adding drifts at fixed μ, p∥ changes the energy at O(ε); the first-order
+        // docs/design.md: adding drifts at fixed μ, p∥ changes the energy at O(ε); the first-order
         // placement rescales the gyration so the drift-frame kinetic energy is the requested one
         Species s = Species.PROTON;
         Field f = new org.twinorbit.fields.GradientField(1.0, 1.0);

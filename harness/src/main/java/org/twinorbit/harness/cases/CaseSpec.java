@@ -23,7 +23,7 @@ public final class CaseSpec {
     public static final int DEFAULT_STEPS_PER_GYRO = 32;
     public static final double DEFAULT_GC_STEP = 1.0;
     /**
-     * Default reference tolerance: DESIGN.md asks for 1e-10 or tighter so that the reference's
+     * Default reference tolerance: docs/design.md asks for 1e-10 or tighter so that the reference's
      * own slow energy loss does not show up as a spurious μ change on long runs.
      */
     public static final double DEFAULT_RTOL = 1.0e-10;

@@ -10,7 +10,7 @@ import org.twinorbit.shared.Vec3;
 
 /**
  * A case checked against its field: the field built, the starting point inside the domain,
- * the energy and ε = ρ0/L fixed, and the scales every metric is measured in (DESIGN.md "What is
+ * the energy and ε = ρ0/L fixed, and the scales every metric is measured in (docs/design.md "What is
  * measured"): ρ0 = p/(|q|B) with p the total momentum and B at the initial guiding center,
  * T_c = 2πγm/(|q|B); ε = ρ0/L with ρ0 taken in the field's {@link Field#epsilonFieldStrength}
  * (the normal field Bn of a current sheet, wherever the particle starts).

@@ -7,7 +7,7 @@ import org.twinorbit.shared.Species;
 
 /**
  * The energy error of a full orbit: max over samples of |W − W0| / K0 with W = kinetic + qΦ
- * and K0 the initial kinetic energy (DESIGN.md "What is measured"). Defined only in static fields
+ * and K0 the initial kinetic energy (docs/design.md "What is measured"). Defined only in static fields
  * with a potential; elsewhere the error reads NaN. An error above {@link #BLOW_UP} marks the run
  * as blown up, which the runner reports as unstable.
  */

@@ -9,7 +9,7 @@ import org.twinorbit.shared.Species;
 /**
  * Records a guiding-center run as a {@link Track} (X and v∥ = p∥/(γm)) and measures its energy
  * error: max |W − W0| / K0 with W = (γ − 1)mc² + qΦ(X), γ = sqrt(1 + (p∥² + 2mμB)/(m²c²))
- * (DESIGN.md "Integrators"), defined in static fields with a potential.
+ * (docs/design.md "Integrators"), defined in static fields with a potential.
  */
 public final class GuidingCenterRecorder implements GuidingCenterObserver {
 

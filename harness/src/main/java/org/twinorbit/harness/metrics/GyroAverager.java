@@ -14,7 +14,7 @@ import org.twinorbit.shared.Species;
  * 2π (the crossing located by linear interpolation inside the step). Over each gyration the
  * time averages of μ = m|w|²/(2B) (= p⊥²/(2mB)), of the guiding center X = x − m(b×w)/(qB) and
  * of v∥ are taken with the trapezoidal rule, split exactly at the crossings, so that no
- * partial gyration enters a mean (DESIGN.md "What is measured").
+ * partial gyration enters a mean (docs/design.md "What is measured").
  *
  * <p>Beside the whole gyrations it accumulates the signed gyrophase (positive in the sense the
  * charge gyrates), from which the mean gyrofrequency over any window is read: comparing two runs

@@ -5,7 +5,7 @@ import org.twinorbit.fields.Field;
 import org.twinorbit.shared.FieldSample;
 
 /**
- * The metrics of DESIGN.md "What is measured" computed from what the observers recorded. Every
+ * The metrics of docs/design.md "What is measured" computed from what the observers recorded. Every
  * average is over whole periods: whole gyrations for a full orbit, whole bounce periods
  * (between mirror points of the same direction) for a trapped orbit.
  */

@@ -12,7 +12,7 @@ import java.util.UUID;
 /**
  * Writes result files atomically: the bytes go to a temporary file in the same directory, which
  * is then moved over the target in one step, so an interrupted run never leaves a half-written
- * table (DESIGN.md "Bad input").
+ * table (docs/design.md "Bad input").
  */
 public final class AtomicFiles {
 

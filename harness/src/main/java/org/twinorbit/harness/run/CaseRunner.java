@@ -34,7 +34,7 @@ public final class CaseRunner {
     static final int REFERENCE_SAMPLES_PER_GYRO = 32;
     /** Points kept per plotted curve. */
     static final int PLOT_POINTS = 600;
-    /** Factor by which the self-estimate runs tighten the reference tolerance (DESIGN.md). */
+    /** Factor by which the self-estimate runs tighten the reference tolerance (docs/design.md). */
     static final double TIGHTER = 100;
     /** Gyroperiods a crossing run goes on after the exit, so that a whole gyration lies beyond it. */
     static final double SHEET_EXIT_MARGIN_GYRO = 2;

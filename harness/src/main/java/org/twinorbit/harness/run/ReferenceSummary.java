@@ -2,7 +2,7 @@ package org.twinorbit.harness.run;
 
 /**
  * A reference integration and its self-estimated error: the same run repeated at a 100×
- * tighter tolerance (DESIGN.md "Integrators"), compared at the end time.
+ * tighter tolerance (docs/design.md "Integrators"), compared at the end time.
  *
  * @param model             {@code full-orbit} or {@code guiding-center}
  * @param method            the integrator and its source

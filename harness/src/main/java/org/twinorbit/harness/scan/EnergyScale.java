@@ -8,7 +8,7 @@ import org.twinorbit.shared.Vec3;
 
 /**
  * The one-to-one relation between ε = ρ0/L and the kinetic energy of a species at a fixed field
- * (DESIGN.md "What is measured"): ρ0 = p/(|q|B0) with p the total momentum and B0 = |B| at the
+ * (docs/design.md "What is measured"): ρ0 = p/(|q|B0) with p the total momentum and B0 = |B| at the
  * initial guiding center, L the field's declared length. Relativistic throughout, so that an
  * electron scan reaching MeV energies reads correctly.
  */

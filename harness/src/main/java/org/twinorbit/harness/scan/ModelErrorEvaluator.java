@@ -21,7 +21,7 @@ import org.twinorbit.shared.Species;
 import org.twinorbit.shared.Vec3;
 
 /**
- * The model error of the guiding-center approximation at one scan point (DESIGN.md "What is
+ * The model error of the guiding-center approximation at one scan point (docs/design.md "What is
  * measured"): one case of the harness's {@link CaseRunner} — the guiding-center reference
  * against the gyro-averaged full-orbit reference, both at the same tight tolerance, over a
  * gyrophase ensemble, each phase compared with its own guiding center unless the shared

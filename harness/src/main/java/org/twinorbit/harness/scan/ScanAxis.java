@@ -5,7 +5,7 @@ import java.util.function.DoubleUnaryOperator;
 /**
  * What ε means in a scan and how it reads as an energy: for a static field ε = ρ0/L, varied by
  * the kinetic energy; for a time-dependent field ε is the ratio of the gyroperiod to the field's
- * time scale, 1/(Ωτ) for {@code ramp} and ω/Ω for {@code wave} (DESIGN.md "Breakdown scan"), at
+ * time scale, 1/(Ωτ) for {@code ramp} and ω/Ω for {@code wave} (docs/design.md "Breakdown scan"), at
  * a fixed energy.
  *
  * @param meaning       what ε is, in words for tables (e.g. "rho0/L")

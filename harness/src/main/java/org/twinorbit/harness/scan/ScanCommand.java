@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code twinorbit scan}: the breakdown scan of DESIGN.md — the guiding-center model error
+ * {@code twinorbit scan}: the breakdown scan of docs/design.md — the guiding-center model error
  * against ε over a log-spaced range, ε* per metric and tolerance, and the energy it reads as.
  * Wall-clock times go to the terminal and to {@link Timings#FILE_NAME} in {@code --out}, never
  * into scan.* or safe-use.*.

@@ -6,7 +6,7 @@ import java.util.stream.Collectors;
 import org.twinorbit.harness.run.PhaseStatistic;
 
 /**
- * The model errors a breakdown scan measures at every ε (DESIGN.md "What is measured"), each the
+ * The model errors a breakdown scan measures at every ε (docs/design.md "What is measured"), each the
  * guiding-center reference against the gyro-averaged full-orbit reference, with the default
  * tolerance at which its ε* is found.
  */

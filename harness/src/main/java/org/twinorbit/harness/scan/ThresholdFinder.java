@@ -2,7 +2,7 @@ package org.twinorbit.harness.scan;
 
 /**
  * Finds ε*, the first ε at which an error exceeds a tolerance, refined by log-log interpolation
- * between the last point within tolerance and the first point beyond it (DESIGN.md "Breakdown
+ * between the last point within tolerance and the first point beyond it (docs/design.md "Breakdown
  * scan"). Errors of breakdown typically follow a power law or an exponential in 1/ε; a power law
  * is a straight line in log-log, so the interpolation is exact for it and close for the other
  * between neighbouring points.

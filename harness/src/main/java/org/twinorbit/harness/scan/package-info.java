@@ -1,7 +1,7 @@
 /**
  * Breakdown scans: the model error of the guiding-center approximation against ε = ρ0/L (or
  * 1/(Ωτ), ω/Ω for time-dependent fields), the threshold ε* per metric and tolerance, and the
- * safe-use map over the field library (DESIGN.md "What is measured", "Breakdown scan").
+ * safe-use map over the field library (docs/design.md "What is measured", "Breakdown scan").
  *
  * <p>Pieces, each with one job: {@link org.twinorbit.harness.scan.EpsilonGrid} (the ε values),
  * {@link org.twinorbit.harness.scan.EnergyScale} (ε ↔ kinetic energy),

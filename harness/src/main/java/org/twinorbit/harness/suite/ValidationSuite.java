@@ -19,11 +19,11 @@ import org.twinorbit.shared.Vec3;
  * The built-in validation suite: every field of the library with cases chosen to exercise it —
  * several pitch angles, a small and a moderate ε, protons and electrons — and every integrator.
  * Durations and ensembles are sized so that the full suite stays under a minute and the quick
- * one under ten seconds on two cores (DESIGN.md "Performance targets").
+ * one under ten seconds on two cores (docs/design.md "Performance targets").
  */
 public final class ValidationSuite {
 
-    /** Gyrophases of the full suite (the DESIGN.md default). */
+    /** Gyrophases of the full suite (the docs/design.md default). */
     static final int PHASES = 8;
     /** Gyrophases of the quick suite: enough for a mean and a worst case, half the cost. */
     static final int QUICK_PHASES = 4;

@@ -23,7 +23,7 @@ import org.twinorbit.shared.Species;
  *       its pitch angle to b at the start (b = ẑ on the mirror axis), and lies ρ0 sin α from
  *       the guiding center with ρ0 = p/(|q| B0) (zeroth-order placement; common practice);</li>
  *   <li>the field card holds at least 50 points and, on the axis of the paraxial mirror,
- *       B_z = B0 (1 + (Rm − 1) z²/Lm²) (DESIGN.md mirror field; Chen, Introduction to Plasma
+ *       B_z = B0 (1 + (Rm − 1) z²/Lm²) (docs/design.md mirror field; Chen, Introduction to Plasma
  *       Physics, 1984, §2.3.3);</li>
  *   <li>the main run spans the end time in whole steps, and the convergence sweep halves dt
  *       at the same span (derived).</li>

@@ -51,7 +51,7 @@ class LeapfrogRippleTest {
         s.duration = 20.0;
         CaseResult r = TestCases.run(s);
         double v = r.resolved().momentum() / (r.resolved().gamma() * r.resolved().species().mass());
-        double vE = 1e4 / 1.0; // DESIGN.md defaults: E0 = 10 kV/m, B0 = 1 T
+        double vE = 1e4 / 1.0; // docs/design.md defaults: E0 = 10 kV/m, B0 = 1 T
         double predicted = 4 * (vE / v) * RADIUS_EXCESS;
         double err = TestCases.row(r, "boris").metric("energy_error").worst();
         // K0 = m (w + v_E)²/2 differs from m v²/2 by ±2 v_E/v = 1.4 % with the phase, and the

@@ -17,7 +17,7 @@ class LossConeClassTest {
 
     @Test
     void lostInTheLossConeIsNotAFailure() {
-        // Rm = 4 (DESIGN.md default): loss cone sin²α < B_min/B_max = 1/4, α < 30°
+        // Rm = 4 (docs/design.md default): loss cone sin²α < B_min/B_max = 1/4, α < 30°
         // (common practice); a pitch of 20° escapes past |z| = Lm within a bounce-free transit
         CaseSpec s = TestCases.spec("mirror", "boris", "gc-rk4");
         s.eps = 0.02;

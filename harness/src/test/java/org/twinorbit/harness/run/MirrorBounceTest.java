@@ -23,7 +23,7 @@ class MirrorBounceTest {
         s.duration = 2.0;
         s.durationUnit = "bounces";
         CaseResult r = TestCases.run(s);
-        double rm = 4.0; // DESIGN.md default mirror ratio, Lm = 1 m
+        double rm = 4.0; // docs/design.md default mirror ratio, Lm = 1 m
         double lm = 1.0;
         double gamma = r.resolved().gamma();
         double u = r.resolved().momentum() / r.resolved().species().mass();

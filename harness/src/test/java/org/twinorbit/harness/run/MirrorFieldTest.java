@@ -24,7 +24,7 @@ class MirrorFieldTest {
         s.duration = 2.0;
         s.durationUnit = "bounces";
         CaseResult r = TestCases.run(s);
-        double expected = 0.5 / Math.pow(Math.sin(Math.toRadians(60)), 2); // B0 = 0.5 T (DESIGN.md)
+        double expected = 0.5 / Math.pow(Math.sin(Math.toRadians(60)), 2); // B0 = 0.5 T (docs/design.md)
         // the parabola through three samples around the turn leaves an error of the order of
         // the third derivative times h³ (h = 1 gyroperiod, a bounce is ~66): ~1e-6; the
         // guiding center starts from a particle at ε = 0.01, whose μ and p∥ carry O(ε²) = 1e-4

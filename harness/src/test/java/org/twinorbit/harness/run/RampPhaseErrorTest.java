@@ -8,7 +8,7 @@ import org.twinorbit.harness.cases.CaseSpec;
 
 /**
  * The Boris phase error where Ω grows in time: in the {@code ramp} field B = B0(1 + t/τ)
- * (τ = 200 initial gyroperiods by default, DESIGN.md), so over 100 gyroperiods Ω rises by half.
+ * (τ = 200 initial gyroperiods by default, docs/design.md), so over 100 gyroperiods Ω rises by half.
  * Each step turns u by 2 arctan(Ω dt/2) (Birdsall & Langdon, Plasma Physics via Computer
  * Simulation (1991), §4-4, section from memory) with the Ω of that time, so the phase turned over [0, T] falls short of
  * ∫Ω dt by ∫Ω δ(Ω dt) dt with δ(x) = 2 arctan(x/2)/x − 1: the measured phase error is their

@@ -20,7 +20,7 @@ import org.twinorbit.harness.cases.CaseSpec;
  */
 class SheetCrossingTest {
 
-    static final double B0 = 20e-9, BN = 2e-9, DELTA = 6.4e6;   // the field's defaults (DESIGN.md)
+    static final double B0 = 20e-9, BN = 2e-9, DELTA = 6.4e6;   // the field's defaults (docs/design.md)
 
     private static CaseSpec crossing() {
         CaseSpec s = TestCases.spec("current-sheet", "none", "none");

@@ -32,7 +32,7 @@ import org.twinorbit.shared.Vec3;
  */
 public final class FullOrbitReference {
 
-    /** Default relative tolerance: tight enough for 10⁴–10⁵ gyrations (DESIGN.md). */
+    /** Default relative tolerance: tight enough for 10⁴–10⁵ gyrations (docs/design.md). */
     public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-11;
     /**
      * The tightest relative tolerance used: below ~1e-14 the error of an 8th-order step in double

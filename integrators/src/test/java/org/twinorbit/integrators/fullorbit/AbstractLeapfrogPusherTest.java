@@ -145,7 +145,7 @@ abstract class AbstractLeapfrogPusherTest {
      * The synchronised velocity of a particle gyrating in crossed fields keeps its gyration speed
      * |u − v_E| exactly (non-relativistic exact motion; Jackson §12.3, section from memory): the plain average of the
      * two half-step velocities would be short by 1/sqrt(1 + (Ω Δt/2)²) = −3.7 % at 16 steps per
-     * gyration (DESIGN.md). At u ~ 1e4 m/s, γ − 1 ~ 1e-9 bounds what the relativistic schemes
+     * gyration (docs/design.md). At u ~ 1e4 m/s, γ − 1 ~ 1e-9 bounds what the relativistic schemes
      * may differ.
      */
     @Test
@@ -352,7 +352,7 @@ abstract class AbstractLeapfrogPusherTest {
         }
     }
 
-    /** A step allocates nothing (DESIGN.md): measured with the JVM's per-thread allocation counter. */
+    /** A step allocates nothing (docs/design.md): measured with the JVM's per-thread allocation counter. */
     @Test
     void stepsWithoutAllocating() {
         var mx = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
@@ -374,7 +374,7 @@ abstract class AbstractLeapfrogPusherTest {
         assertTrue(allocated < 1024, allocated + " bytes over 1e5 steps");
     }
 
-    /** Leaving the domain stops the run as LOST at the last position inside (DESIGN.md). */
+    /** Leaving the domain stops the run as LOST at the last position inside (docs/design.md). */
     @Test
     void marksLostAndKeepsLastGoodState() {
         Field f = TestField.walled(1e-3, 1.0);
