@@ -87,6 +87,27 @@ class ScoreCommandTest {
         assertTrue(o.out().contains("outside-skewed: energy-trend"), o.out());
     }
 
+    /**
+     * The sign error in the first electric half kick: the scheme converges to an orbit without
+     * the E×B drift, so its error does not shrink with dt and the order verdict fails (local
+     * orders near 0, declared 2), while the built-in Boris passes the same case.
+     */
+    @Test
+    void aSignErrorInTheElectricKickFailsTheOrderVerdict() throws IOException {
+        TestCommandLine.succeeded("export", "--field", "crossed", "--energy", "1e4", "--pitch", "90", "--phases", "2",
+                "--duration", "10", "--out", tmp.toString());
+        Path dir = tmp.resolve("crossed-proton");
+        OutsideCode.push(dir, new FlippedKickBorisPusher());
+        TestCommandLine.Outcome bad = TestCommandLine.exec("score", "--export", dir.toString(), "--name", "outside-bug",
+                "--order", "2", "--property", "relativistic", "--quiet");
+        assertEquals(1, bad.code(), bad.out() + bad.err());
+        assertTrue(bad.out().contains("outside-bug: order: local orders"), bad.out());
+        OutsideCode.push(dir, Pushers.byName("boris"));
+        TestCommandLine.Outcome good = TestCommandLine.exec("score", "--export", dir.toString(), "--name", "outside-boris",
+                "--order", "2", "--property", "relativistic", "--quiet");
+        assertEquals(0, good.code(), good.out() + good.err());
+    }
+
     @Test
     void malformedTrajectoriesAreRefusedWithTheProblemNamed() throws IOException {
         Path dir = exported();
