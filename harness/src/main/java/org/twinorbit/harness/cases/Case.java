@@ -45,6 +45,12 @@ public record Case(String name, String field, Map<String, Double> fieldParameter
                 duration, durationUnit, pushers, stepsPerGyro, gcIntegrators, gcStepGyro, referenceRtol, gcStart);
     }
 
+    /** Copy with another full-orbit step: {@code n} steps per initial gyroperiod. */
+    public Case withStepsPerGyro(int n) {
+        return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, phases,
+                duration, durationUnit, pushers, n, gcIntegrators, gcStepGyro, referenceRtol, gcStart);
+    }
+
     /** Copy with other full-orbit pushers (names as in {@code --pushers}). */
     public Case withPushers(List<String> names) {
         return new Case(name, field, fieldParameters, species, start, energyEv, eps, pitchDeg, phases,

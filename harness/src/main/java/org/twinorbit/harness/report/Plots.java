@@ -178,7 +178,8 @@ public final class Plots {
         new java.awt.Color(0xe377c2), new java.awt.Color(0x17becf), new java.awt.Color(0x7f7f7f),
         new java.awt.Color(0xbcbd22)};
 
-    private static XYChart chart(String title, String x, String y) {
+    /** A chart in the project's style: white, thin grid, decades only on log axes. */
+    public static XYChart chart(String title, String x, String y) {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(x).yAxisTitle(y).build();
         c.getStyler().setMarkerSize(5);
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS);
@@ -231,7 +232,7 @@ public final class Plots {
     }
 
     /** Renders a chart to PNG and writes it atomically. */
-    static void save(XYChart c, Path file) {
+    public static void save(XYChart c, Path file) {
         try {
             AtomicFiles.write(file, png(BitmapEncoder.getBufferedImage(c)));
         } catch (IOException e) {

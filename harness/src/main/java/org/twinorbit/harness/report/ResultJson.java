@@ -199,7 +199,7 @@ public final class ResultJson {
     }
 
     /** A finite number, or null. */
-    static Double num(double v) {
+    public static Double num(double v) {
         return Double.isFinite(v) ? v : null;
     }
 
