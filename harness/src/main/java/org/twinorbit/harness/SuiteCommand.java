@@ -89,6 +89,7 @@ public final class SuiteCommand implements Callable<Integer> {
 
     /** The names, each checked against the registry. @throws IllegalArgumentException naming --pushers */
     static List<String> checked(List<String> names) {
+        names = names.stream().map(Registry::current).toList();
         for (String n : names) {
             if (!Registry.pusherNames().contains(n)) {
                 throw new IllegalArgumentException("--pushers: unknown pusher '" + n + "'; allowed: "

@@ -41,7 +41,7 @@ class CommandLineTest {
     @Test
     void unknownIntegratorListsTheIntegrators() {
         TestCommandLine.Outcome o = badRun("--pushers", "boris,leapfrog9");
-        assertTrue(o.err().contains("pushers: unknown integrator 'leapfrog9'; allowed: boris, boris-nr, vay"), o.err());
+        assertTrue(o.err().contains("pushers: unknown integrator 'leapfrog9'; allowed: boris, boris-newtonian, vay"), o.err());
         TestCommandLine.Outcome g = badRun("--gc-integrators", "gc-euler");
         assertTrue(g.err().contains("gc-integrators: unknown integrator 'gc-euler'; allowed: gc-rk4"), g.err());
     }
@@ -130,9 +130,18 @@ class CommandLineTest {
     void integratorsListsEveryIntegrator() {
         TestCommandLine.Outcome o = TestCommandLine.exec("integrators", "--json");
         assertEquals(0, o.code());
-        for (String name : new String[] {"\"boris\"", "\"boris-nr\"", "\"vay\"", "\"higuera-cary\"", "\"rk4\"", "\"gc-rk4\""}) {
+        for (String name : new String[] {"\"boris\"", "\"boris-newtonian\"", "\"vay\"", "\"higuera-cary\"", "\"rk4\"", "\"gc-rk4\""}) {
             assertTrue(o.out().contains("\"name\" : " + name), name);
         }
         assertTrue(o.out().contains("\"model\" : \"guiding-center\""));
+    }
+
+    /** The name of release 0.1 still works for one release, with a warning naming the new one. */
+    @Test
+    void deprecatedPusherNameStillRunsWithAWarning() {
+        TestCommandLine.Outcome o = TestCommandLine.exec("run", "--field", "uniform", "--phases", "1", "--duration", "2",
+                "--pushers", "boris-nr", "--gc-integrators", "none", "--quiet");
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("boris-newtonian "), o.out());
     }
 }

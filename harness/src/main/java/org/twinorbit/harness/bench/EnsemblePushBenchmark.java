@@ -30,7 +30,7 @@ public class EnsemblePushBenchmark {
 
     static final int PARTICLES = 4096;
 
-    @Param({"boris", "boris-nr", "vay", "higuera-cary", "rk4"})
+    @Param({"boris", "boris-newtonian", "vay", "higuera-cary", "rk4"})
     public String pusher;
 
     @Param({"uniform", "dipole"})

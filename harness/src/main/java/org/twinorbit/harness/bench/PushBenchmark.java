@@ -36,7 +36,7 @@ public class PushBenchmark {
 
     static final int STEPS = 1000;
 
-    @Param({"boris", "boris-nr", "vay", "higuera-cary", "rk4"})
+    @Param({"boris", "boris-newtonian", "vay", "higuera-cary", "rk4"})
     public String pusher;
 
     @Param({"uniform", "dipole"})

@@ -23,7 +23,7 @@ public final class PushCpuTime {
     private PushCpuTime() {}
 
     public static void main(String[] args) {
-        List<String> pushers = args.length > 0 ? List.of(args) : List.of("boris-nr", "boris");
+        List<String> pushers = args.length > 0 ? List.of(args) : List.of("boris-newtonian", "boris");
         ThreadMXBean mx = ManagementFactory.getThreadMXBean();
         System.out.println("| pusher | field | cpu ns/push (median of 5) | wall ns/push (median of 5) |");
         System.out.println("|---|---|---|---|");

@@ -1,5 +1,6 @@
 package org.twinorbit.harness.cases;
 
+import org.twinorbit.harness.run.Registry;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -166,6 +167,7 @@ public final class CaseSpec {
                 all.stream().filter(a -> !out.contains(a)).forEach(out::add);
                 continue;
             }
+            t = Registry.current(t);
             if (!all.contains(t)) {
                 throw new IllegalArgumentException(option + ": unknown integrator '" + t + "'; allowed: "
                         + String.join(", ", all) + ", all, none");

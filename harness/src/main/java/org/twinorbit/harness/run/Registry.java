@@ -27,6 +27,24 @@ public final class Registry {
         return guidingCenterIntegrators().stream().map(GuidingCenterIntegrator::name).toList();
     }
 
+    /**
+     * The current name of a pusher: a deprecated old name is replaced by its new one, with a
+     * warning on stderr (once per name and run); any other name is returned as it is.
+     */
+    public static String current(String name) {
+        String now = Pushers.DEPRECATED.get(name);
+        if (now == null) {
+            return name;
+        }
+        if (WARNED.add(name)) {
+            System.err.println("twinorbit: warning: pusher name '" + name + "' is deprecated, use '" + now
+                    + "'; the old name goes in the next release");
+        }
+        return now;
+    }
+
+    private static final java.util.Set<String> WARNED = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
     /** @throws IllegalArgumentException naming --pushers and the allowed names */
     public static FullOrbitPusher pusher(String name) {
         try {

@@ -107,7 +107,8 @@ public final class ScanRequest {
         }
         List<String> pushers = new ArrayList<>();
         List<String> gcs = new ArrayList<>();
-        for (String name : integrators) {
+        for (String given : integrators) {
+            String name = Registry.current(given);
             if (Registry.pusherNames().contains(name)) {
                 pushers.add(name);
             } else if (Registry.guidingCenterNames().contains(name)) {
@@ -140,7 +141,7 @@ public final class ScanRequest {
         settings.put("duration", d.value());
         settings.put("duration_unit", d.unit().label());
         settings.put("reference_rtol", referenceRtol);
-        settings.put("integrators", new ArrayList<>(integrators));
+        settings.put("integrators", integrators.stream().map(Registry::current).toList());
         settings.put("gc_start", gcStart.label());
         ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
                 referenceRtol, pushers, gcs, threads, gcStart);

@@ -13,7 +13,9 @@ import org.twinorbit.shared.FieldSample;
 public final class BorisNonRelativisticPusher extends LeapfrogPusher {
 
     /** The stable name. */
-    public static final String NAME = "boris-nr";
+    public static final String NAME = "boris-newtonian";
+    /** The name of release 0.1, accepted for one more release ({@link Pushers#DEPRECATED}). */
+    public static final String OLD_NAME = "boris-nr";
 
     @Override public String name() { return NAME; }
 

@@ -39,7 +39,12 @@ public final class Pushers {
      *
      * @throws IllegalArgumentException naming the valid pushers
      */
+    /** Old names still accepted, each with its current one; they go in the next release. */
+    public static final java.util.Map<String, String> DEPRECATED = java.util.Map.of(
+            BorisNonRelativisticPusher.OLD_NAME, BorisNonRelativisticPusher.NAME);
+
     public static FullOrbitPusher byName(String name) {
+        name = DEPRECATED.getOrDefault(name, name);
         List<FullOrbitPusher> all = all();
         for (FullOrbitPusher p : all) {
             if (p.name().equals(name)) {

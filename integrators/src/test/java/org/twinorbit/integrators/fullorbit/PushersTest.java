@@ -14,7 +14,7 @@ class PushersTest {
 
     @Test
     void listsTheBuiltInPushersFirstInTheirOrderThenOthers() {
-        assertEquals(List.of("boris", "boris-nr", "vay", "higuera-cary", "rk4", "test-explicit-euler"),
+        assertEquals(List.of("boris", "boris-newtonian", "vay", "higuera-cary", "rk4", "test-explicit-euler"),
                 Pushers.names());
         for (FullOrbitPusher p : Pushers.all()) {
             assertTrue(!p.description().isBlank() && p.order() >= 1, p.name());
@@ -25,7 +25,7 @@ class PushersTest {
     void refusesAnUnknownNameListingTheValidOnes() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Pushers.byName("borris"));
         assertTrue(e.getMessage().contains("'borris'"), e.getMessage());
-        assertTrue(e.getMessage().contains("boris, boris-nr, vay, higuera-cary, rk4"), e.getMessage());
+        assertTrue(e.getMessage().contains("boris, boris-newtonian, vay, higuera-cary, rk4"), e.getMessage());
     }
 
     /**
