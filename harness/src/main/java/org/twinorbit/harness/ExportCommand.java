@@ -65,7 +65,7 @@ public final class ExportCommand implements Callable<Integer> {
         }
         pw.println("wrote " + cases.size() + " case" + (cases.size() == 1 ? "" : "s") + " into " + out
                 + (cases.size() == 1 ? "/" + names.get(0) : "") + ": manifest.json, case.csv, runs.csv, initial-states.csv, "
-                + "field-card.json, field-card.csv");
+                + "gc-start.csv, gc-runs.csv, field-card.json, field-card.csv");
         pw.flush();
         return 0;
     }

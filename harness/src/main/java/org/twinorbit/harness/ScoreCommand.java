@@ -41,6 +41,10 @@ public final class ScoreCommand implements Callable<Integer> {
             + "names (default: the --export directory).")
     Path trajectories;
 
+    @Option(names = "--model", paramLabel = "MODEL", defaultValue = "full-orbit", description = "What the trajectories "
+            + "are: full-orbit (trajectory-*.csv) or guiding-center (gc-trajectory-*.csv) (default ${DEFAULT-VALUE}).")
+    String model;
+
     @Option(names = "--name", paramLabel = "NAME", defaultValue = "outside", description = "The scheme's name in "
             + "reports (default ${DEFAULT-VALUE}).")
     String name;
@@ -80,8 +84,22 @@ public final class ScoreCommand implements Callable<Integer> {
         if (out != null) {
             OutputDirectory.prepare(out);
         }
-        ExportedRuns runs = ExportedRuns.read(export, trajectories != null ? trajectories : export, name, order, declared);
-        CaseResult r = new CaseRunner(execution.threads(), execution.quiet()).with(List.of(runs.pusher())).run(runs.c());
+        Path from = trajectories != null ? trajectories : export;
+        CaseRunner runner = new CaseRunner(execution.threads(), execution.quiet());
+        ExportedRuns runs;
+        switch (model) {
+            case "full-orbit" -> {
+                runs = ExportedRuns.read(export, from, name, order, declared);
+                runner = runner.with(List.of(runs.pusher()));
+            }
+            case "guiding-center" -> {
+                runs = ExportedRuns.readGuidingCenter(export, from, name, order, declared);
+                runner = runner.withGuidingCenters(List.of(runs.gc()));
+            }
+            default -> throw new BadInputException("--model: unknown model '" + model
+                    + "'; allowed: full-orbit, guiding-center");
+        }
+        CaseResult r = runner.run(runs.c());
         List<RowVerdict> verdicts = Verdicts.judge(r);
         PrintWriter pw = spec.commandLine().getOut();
         if (json) {

@@ -31,7 +31,13 @@ import org.twinorbit.shared.FieldSample;
  *                     step, the first sample the initial state), trajectory_file}]: the main run
  *                     of every phase, and levels 1–3 of the convergence sweep (dt/2, dt/4,
  *                     dt/8) for phase 0 — level 0 is the main run's phase 0;
- *                     trajectory_columns; field_card, field_card_table
+ *                     trajectory_columns; guiding_center {start {x_m, p_par_kg_m_per_s,
+ *                     mu_j_per_t}, runs [{level 0 (the run) to 3 (dt/8), dt_s, steps,
+ *                     trajectory_file}], trajectory_columns} for an outside guiding-center
+ *                     integrator (one shared guiding center, μ constant); field_card,
+ *                     field_card_table
+ * gc-start.csv        x_m, y_m, z_m, p_par_kg_m_per_s, mu_j_per_t: the same start as CSV
+ * gc-runs.csv         level, dt_s, steps, trajectory_file: the same runs as CSV
  * case.csv            key,value,unit: field, mass, charge, field.NAME for each parameter (the
  *                     same facts for readers without JSON)
  * runs.csv            purpose,level,dt_s,steps,phases,trajectory_file: the runs of the manifest,
@@ -58,6 +64,9 @@ public final class CaseExport {
     static final int CARD_SIDE = 4;
     /** Half-width of the sample grid, in initial gyroradii. */
     static final double CARD_HALF_WIDTH_RHO = 5;
+    /** Columns of a guiding-center trajectory file written back by an outside code (μ is constant). */
+    public static final List<String> GC_TRAJECTORY_COLUMNS = List.of("t_s", "x_m", "y_m", "z_m", "p_par_kg_m_per_s");
+
     /** Columns of a trajectory file written back by an outside code. */
     public static final List<String> TRAJECTORY_COLUMNS = List.of("phase", "t_s", "x_m", "y_m", "z_m", "ux_m_per_s",
             "uy_m_per_s", "uz_m_per_s");
@@ -71,6 +80,8 @@ public final class CaseExport {
         AtomicFiles.write(dir.resolve("initial-states.csv"), initialStates(s));
         AtomicFiles.write(dir.resolve("case.csv"), caseTable(rc));
         AtomicFiles.write(dir.resolve("runs.csv"), runTable(s));
+        AtomicFiles.write(dir.resolve("gc-start.csv"), guidingCenterStart(s));
+        AtomicFiles.write(dir.resolve("gc-runs.csv"), guidingCenterRunTable(s));
         AtomicFiles.write(dir.resolve("field-card.csv"), cardTable(rc));
         AtomicFiles.write(dir.resolve("field-card.json"), ResultJson.write(ToolInfo.stamped(card(rc))));
         AtomicFiles.write(dir.resolve("manifest.json"), ResultJson.write(ToolInfo.stamped(manifest(s))));
@@ -127,6 +138,22 @@ public final class CaseExport {
         return sb.toString();
     }
 
+    static String guidingCenterStart(RunSchedule s) {
+        RunSchedule.GuidingCenterRuns g = s.guidingCenter();
+        return "x_m,y_m,z_m,p_par_kg_m_per_s,mu_j_per_t\n" + g.x0()[0] + "," + g.x0()[1] + "," + g.x0()[2] + ","
+                + g.pPar0() + "," + g.mu() + "\n";
+    }
+
+    static String guidingCenterRunTable(RunSchedule s) {
+        RunSchedule.GuidingCenterRuns g = s.guidingCenter();
+        StringBuilder sb = new StringBuilder("level,dt_s,steps,trajectory_file\n");
+        for (int l = 0; l < g.dt().length; l++) {
+            sb.append(l).append(',').append(g.dt()[l]).append(',').append(g.steps()[l]).append(",gc-trajectory-")
+                    .append(l).append(".csv\n");
+        }
+        return sb.toString();
+    }
+
     static Map<String, Object> manifest(RunSchedule s) {
         ResolvedCase rc = s.resolved();
         Case c = rc.spec();
@@ -167,6 +194,22 @@ public final class CaseExport {
         }
         m.put("runs", runs);
         m.put("trajectory_columns", TRAJECTORY_COLUMNS);
+        RunSchedule.GuidingCenterRuns g = s.guidingCenter();
+        Map<String, Object> gc = new LinkedHashMap<>();
+        gc.put("start", Map.of("x_m", List.of(g.x0()[0], g.x0()[1], g.x0()[2]), "p_par_kg_m_per_s", g.pPar0(),
+                "mu_j_per_t", g.mu()));
+        List<Object> gcRuns = new ArrayList<>();
+        for (int l = 0; l < g.dt().length; l++) {
+            Map<String, Object> r = new LinkedHashMap<>();
+            r.put("level", l);
+            r.put("dt_s", g.dt()[l]);
+            r.put("steps", g.steps()[l]);
+            r.put("trajectory_file", "gc-trajectory-" + l + ".csv");
+            gcRuns.add(r);
+        }
+        gc.put("runs", gcRuns);
+        gc.put("trajectory_columns", GC_TRAJECTORY_COLUMNS);
+        m.put("guiding_center", gc);
         m.put("field_card", "field-card.json");
         m.put("field_card_table", "field-card.csv");
         return m;

@@ -68,19 +68,23 @@ public final class CaseRunner {
     private final boolean quiet;
     /** Pushers given as instances (not by name), run beside the case's named ones. */
     private final List<FullOrbitPusher> instances;
+    /** Guiding-center integrators given as instances, run beside the case's named ones. */
+    private final List<GuidingCenterIntegrator> gcInstances;
 
     /** @param threads worker threads (≥ 1) @param quiet no progress bar */
     public CaseRunner(int threads, boolean quiet) {
-        this(threads, quiet, List.of());
+        this(threads, quiet, List.of(), List.of());
     }
 
-    private CaseRunner(int threads, boolean quiet, List<FullOrbitPusher> instances) {
+    private CaseRunner(int threads, boolean quiet, List<FullOrbitPusher> instances,
+                       List<GuidingCenterIntegrator> gcInstances) {
         if (threads < 1) {
             throw new IllegalArgumentException("--threads: must be at least 1, got " + threads);
         }
         this.threads = threads;
         this.quiet = quiet;
         this.instances = List.copyOf(instances);
+        this.gcInstances = List.copyOf(gcInstances);
     }
 
     /**
@@ -88,7 +92,12 @@ public final class CaseRunner {
      * pushers: a pusher that is not registered (a test's, or one replaying a trajectory file).
      */
     public CaseRunner with(List<FullOrbitPusher> pushers) {
-        return new CaseRunner(threads, quiet, pushers);
+        return new CaseRunner(threads, quiet, pushers, gcInstances);
+    }
+
+    /** A runner that also runs these guiding-center integrator instances in every case. */
+    public CaseRunner withGuidingCenters(List<GuidingCenterIntegrator> integrators) {
+        return new CaseRunner(threads, quiet, instances, integrators);
     }
 
     /** Runs one case. */
@@ -109,7 +118,7 @@ public final class CaseRunner {
     public List<CaseResult> run(List<Case> cases, java.util.function.Consumer<CaseResult> onCase) {
         List<Plan> plans = new ArrayList<>();
         for (Case c : cases) {
-            plans.add(new Plan(new ResolvedCase(c), instances));
+            plans.add(new Plan(new ResolvedCase(c), instances, gcInstances));
         }
         List<Parallel.Job> pre = new ArrayList<>();
         for (Plan p : plans) {
@@ -154,7 +163,7 @@ public final class CaseRunner {
      * bounces or crossings is measured first on the guiding-center reference, as a run does.
      */
     public static RunSchedule schedule(Case c) {
-        Plan p = new Plan(new ResolvedCase(c), List.of());
+        Plan p = new Plan(new ResolvedCase(c), List.of(), List.of());
         if (c.durationUnit() == DurationUnit.BOUNCES) {
             p.measureBounce();
         } else if (c.durationUnit() == DurationUnit.CROSSINGS) {
@@ -168,7 +177,14 @@ public final class CaseRunner {
             dts[l] = p.dt / (1 << l);
             steps[l] = p.convN << l;
         }
-        return new RunSchedule(p.rc, p.x0, p.u0, p.dt, p.n, p.tEnd, p.bounce, dts, steps);
+        double[] gcDts = new double[CONVERGENCE_LEVELS];
+        long[] gcSteps = new long[CONVERGENCE_LEVELS];
+        for (int l = 0; l < CONVERGENCE_LEVELS; l++) {
+            gcDts[l] = p.gcDt / (1 << l);
+            gcSteps[l] = p.gcN << l;
+        }
+        return new RunSchedule(p.rc, p.x0, p.u0, p.dt, p.n, p.tEnd, p.bounce, dts, steps,
+                new RunSchedule.GuidingCenterRuns(p.gc0.clone(), p.pPar0, p.mu, gcDts, gcSteps));
     }
 
     /** One case: its setup, its jobs and their result slots. */
@@ -211,7 +227,7 @@ public final class CaseRunner {
         GuidingCenterRecord[] gcMatched;
         GuidingCenterRecord gcTight;
 
-        Plan(ResolvedCase rc, List<FullOrbitPusher> instances) {
+        Plan(ResolvedCase rc, List<FullOrbitPusher> instances, List<GuidingCenterIntegrator> gcInstances) {
             this.rc = rc;
             this.c = rc.spec();
             for (String name : c.pushers()) {
@@ -221,6 +237,7 @@ public final class CaseRunner {
             for (String name : c.gcIntegrators()) {
                 gcs.add(Registry.guidingCenter(name));
             }
+            gcs.addAll(gcInstances);
             double u = Relativity.uFromKinetic(rc.species(), rc.energyEv());
             this.speed = u / rc.gamma();
             this.deadband = DEADBAND * speed;

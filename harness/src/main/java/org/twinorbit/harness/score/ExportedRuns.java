@@ -22,10 +22,12 @@ import org.twinorbit.harness.run.RunSchedule;
  * manifest's definition, checked against what this version would run (steps, step sizes,
  * initial states), and the trajectories as a {@link ReplayPusher}.
  *
- * @param c      the case, with no built-in pusher
- * @param pusher the trajectories, played back
+ * @param c      the case, with no built-in pusher (and, when guiding centers are scored, no
+ *               built-in guiding-center integrator)
+ * @param pusher the full-orbit trajectories, played back; null when guiding centers are scored
+ * @param gc     the guiding-center trajectories, played back; null when full orbits are scored
  */
-public record ExportedRuns(Case c, ReplayPusher pusher) {
+public record ExportedRuns(Case c, ReplayPusher pusher, ReplayGuidingCenter gc) {
 
     private static final ObjectMapper JSON = new ObjectMapper();
 
@@ -37,28 +39,8 @@ public record ExportedRuns(Case c, ReplayPusher pusher) {
      * @param properties   its declared properties
      */
     public static ExportedRuns read(Path caseDir, Path trajectories, String name, int order, Set<String> properties) {
-        Path manifestFile = caseDir.resolve("manifest.json");
-        JsonNode m;
-        try {
-            m = JSON.readTree(Files.readString(manifestFile));
-        } catch (IOException e) {
-            throw new BadInputException("--export: cannot read " + manifestFile + " (" + e.getMessage() + ")");
-        }
-        if (m == null || !"twinorbit-case-export".equals(m.path("schema").asText())) {
-            throw new BadInputException("--export: " + manifestFile + " is not a case export (schema twinorbit-case-export)");
-        }
-        if (m.path("schema_version").asInt() != CaseExport.SCHEMA_VERSION) {
-            throw new BadInputException("--export: " + manifestFile + " has schema_version " + m.path("schema_version")
-                    + ", this version reads " + CaseExport.SCHEMA_VERSION + "; export the case again");
-        }
-        CaseSpec spec;
-        try {
-            spec = JSON.convertValue(m.get("definition"), CaseSpec.class);
-        } catch (IllegalArgumentException e) {
-            throw new BadInputException("--export: the definition in " + manifestFile + " is not a case (" + e.getMessage() + ")");
-        }
-        spec.pushers = List.of("none");
-        Case c = spec.toCase(Registry.pusherNames(), Registry.guidingCenterNames());
+        JsonNode m = manifest(caseDir);
+        Case c = rebuild(m, caseDir, false);
         RunSchedule s = CaseRunner.schedule(c);
         List<ReplayPusher.Recording> recordings = new ArrayList<>();
         for (JsonNode run : m.withArray("runs")) {
@@ -86,8 +68,81 @@ public record ExportedRuns(Case c, ReplayPusher pusher) {
             }
             recordings.add(new ReplayPusher.Recording(dt, byPhase));
         }
-        return new ExportedRuns(c, new ReplayPusher(name, order, properties, recordings));
+        return new ExportedRuns(c, new ReplayPusher(name, order, properties, recordings), null);
     }
+
+    /** As {@link #read}, for an outside guiding-center integrator's trajectories. */
+    public static ExportedRuns readGuidingCenter(Path caseDir, Path trajectories, String name, int order,
+                                                 Set<String> properties) {
+        JsonNode m = manifest(caseDir);
+        Case c = rebuild(m, caseDir, true);
+        RunSchedule.GuidingCenterRuns g = CaseRunner.schedule(c).guidingCenter();
+        JsonNode gc = m.path("guiding_center");
+        if (gc.isMissingNode()) {
+            throw new BadInputException("--export: " + caseDir.resolve("manifest.json") + " has no guiding_center "
+                    + "section; export the case again with this version");
+        }
+        List<ReplayGuidingCenter.Recording> recordings = new ArrayList<>();
+        for (JsonNode run : gc.withArray("runs")) {
+            int level = run.path("level").asInt();
+            double dt = run.path("dt_s").asDouble();
+            long steps = run.path("steps").asLong();
+            if (level >= g.dt().length || Math.abs(dt - g.dt()[level]) > 1e-12 * g.dt()[level] || steps != g.steps()[level]) {
+                throw new BadInputException("--export: guiding-center run '" + run.path("trajectory_file").asText()
+                        + "' asks for " + steps + " steps of " + dt + " s, this version runs a different one; export the "
+                        + "case again with this version");
+            }
+            String file = run.path("trajectory_file").asText();
+            GuidingCenterTrajectory t = GuidingCenterTrajectory.read(trajectories.resolve(file), dt, steps);
+            double sx = Math.max(Math.abs(g.x0()[0]), Math.max(Math.abs(g.x0()[1]), Math.abs(g.x0()[2])));
+            for (int i = 0; i < 3; i++) {
+                if (Math.abs(t.x()[0][i] - g.x0()[i]) > 1e-12 * sx) {
+                    throw new BadInputException("trajectory " + file + ": does not start at the exported guiding center "
+                            + "(gc-start.csv); its first sample must be the state at t = 0");
+                }
+            }
+            if (Math.abs(t.pPar()[0] - g.pPar0()) > 1e-12 * Math.abs(g.pPar0()) + 1e-300) {
+                throw new BadInputException("trajectory " + file + ": does not start at the exported p_par (gc-start.csv)");
+            }
+            recordings.add(new ReplayGuidingCenter.Recording(dt, t));
+        }
+        return new ExportedRuns(c, null, new ReplayGuidingCenter(name, order, properties, recordings));
+    }
+
+    private static JsonNode manifest(Path caseDir) {
+        Path manifestFile = caseDir.resolve("manifest.json");
+        JsonNode m;
+        try {
+            m = JSON.readTree(Files.readString(manifestFile));
+        } catch (IOException e) {
+            throw new BadInputException("--export: cannot read " + manifestFile + " (" + e.getMessage() + ")");
+        }
+        if (m == null || !"twinorbit-case-export".equals(m.path("schema").asText())) {
+            throw new BadInputException("--export: " + manifestFile + " is not a case export (schema twinorbit-case-export)");
+        }
+        if (m.path("schema_version").asInt() != CaseExport.SCHEMA_VERSION) {
+            throw new BadInputException("--export: " + manifestFile + " has schema_version " + m.path("schema_version")
+                    + ", this version reads " + CaseExport.SCHEMA_VERSION + "; export the case again");
+        }
+        return m;
+    }
+
+    /** The case of the manifest, without built-in pushers (and GC integrators when those are scored). */
+    private static Case rebuild(JsonNode m, Path caseDir, boolean guidingCenters) {
+        CaseSpec spec;
+        try {
+            spec = JSON.convertValue(m.get("definition"), CaseSpec.class);
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException("--export: the definition in " + caseDir.resolve("manifest.json")
+                    + " is not a case (" + e.getMessage() + ")");
+        }
+        spec.pushers = List.of("none");
+        if (guidingCenters) {
+            spec.gcIntegrators = List.of("none");
+        }
+        return spec.toCase(Registry.pusherNames(), Registry.guidingCenterNames());
+    }
+
 
     /** The first sample must be the exported initial state (to 1e-12 of its size: a written and re-read double). */
     private static void checkStart(String file, int phase, TrajectoryFile.Series s, double[] x0, double[] u0) {

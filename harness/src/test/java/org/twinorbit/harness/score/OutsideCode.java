@@ -54,4 +54,38 @@ final class OutsideCode {
             Files.writeString(caseDir.resolve(run.get("trajectory_file").asText()), sb.toString());
         }
     }
+
+    /** The same for an outside guiding-center integrator: every run of the manifest's guiding_center section. */
+    static void pushGuidingCenter(Path caseDir, org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator scheme)
+            throws IOException {
+        JsonNode m = new ObjectMapper().readTree(caseDir.resolve("manifest.json").toFile());
+        JsonNode c = m.get("case");
+        java.util.Map<String, Double> params = new java.util.LinkedHashMap<>();
+        c.get("field_parameters").fields().forEachRemaining(e -> params.put(e.getKey(), e.getValue().asDouble()));
+        Species s = Species.parse(c.get("species").asText());
+        Field f = Fields.create(c.get("field").asText(), params, s);
+        JsonNode gc = m.get("guiding_center");
+        JsonNode start = gc.get("start");
+        double[] x0 = {start.get("x_m").get(0).asDouble(), start.get("x_m").get(1).asDouble(),
+            start.get("x_m").get(2).asDouble()};
+        double p0 = start.get("p_par_kg_m_per_s").asDouble();
+        double mu = start.get("mu_j_per_t").asDouble();
+        for (JsonNode run : gc.get("runs")) {
+            double dt = run.get("dt_s").asDouble();
+            long steps = run.get("steps").asLong();
+            org.twinorbit.integrators.guidingcenter.GuidingCenterStepper st = scheme.stepper(f, s, mu, dt);
+            st.start(0, x0.clone(), p0);
+            StringBuilder sb = new StringBuilder("t_s,x_m,y_m,z_m,p_par_kg_m_per_s\n");
+            double[] x = new double[3];
+            for (long i = 0; i <= steps; i++) {
+                if (i > 0 && !st.step()) {
+                    break;
+                }
+                st.position(x);
+                sb.append(i * dt).append(',').append(x[0]).append(',').append(x[1]).append(',').append(x[2]).append(',')
+                        .append(st.parallelMomentum()).append('\n');
+            }
+            Files.writeString(caseDir.resolve(run.get("trajectory_file").asText()), sb.toString());
+        }
+    }
 }

@@ -77,6 +77,42 @@ class ScoreCommandTest {
         assertEquals("pass", a.get("verdict").get("result").asText());
     }
 
+    /** The same for guiding centers: the built-in gc-rk4, pushed outside, scores like gc-rk4 itself. */
+    @Test
+    void guidingCentersPushedOutsideScoreLikeTheBuiltInIntegrator() throws IOException {
+        Path dir = exported();
+        OutsideCode.pushGuidingCenter(dir, org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrators.byName("gc-rk4"));
+        JsonNode scored = JSON.readTree(TestCommandLine.succeeded("score", "--export", dir.toString(), "--model",
+                "guiding-center", "--name", "outside-gc", "--order", "4", "--property", "relativistic", "--quiet",
+                "--json"));
+        String[] run = new String[CASE.length + 7];
+        run[0] = "run";
+        System.arraycopy(CASE, 0, run, 1, CASE.length);
+        System.arraycopy(new String[] {"--pushers", "none", "--gc-integrators", "gc-rk4", "--quiet", "--json"}, 0, run,
+                CASE.length + 1, 6);
+        JsonNode builtIn = JSON.readTree(TestCommandLine.succeeded(run));
+        JsonNode a = row(scored, "outside-gc");
+        JsonNode b = row(builtIn, "gc-rk4");
+        for (String metric : List.of("energy_error", "drift_error", "position_error_rho")) {
+            double x = a.get(metric).get("worst").asDouble();
+            double y = b.get(metric).get("worst").asDouble();
+            // the replay's clock is k·dt, the integrator's its own sum of steps: the two differ in the
+            // last bits, which moves round-off-level errors (a zero drift error) by ~1e-16
+            assertEquals(y, x, 1e-12 * Math.abs(y) + 1e-14, metric);
+        }
+        assertEquals(b.get("order").asDouble(), a.get("order").asDouble(), 1e-9);
+        Path first = dir.resolve("gc-trajectory-0.csv");
+        Files.writeString(first, "t,x,y,z,p\n0,0,0,0,0\n");
+        TestCommandLine.Outcome o = TestCommandLine.exec("score", "--export", dir.toString(), "--model", "guiding-center",
+                "--order", "4", "--quiet");
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("must be the header t_s,x_m,y_m,z_m,p_par_kg_m_per_s"), o.err());
+        TestCommandLine.Outcome m = TestCommandLine.exec("score", "--export", dir.toString(), "--model", "drift-kinetic",
+                "--order", "4");
+        assertEquals(2, m.code());
+        assertTrue(m.err().contains("allowed: full-orbit, guiding-center"), m.err());
+    }
+
     @Test
     void aSchemeThatBreaksTheRotationFailsItsVerdictWithExitOne() throws IOException {
         Path dir = exported();
