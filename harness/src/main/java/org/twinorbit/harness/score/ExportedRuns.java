@@ -56,8 +56,10 @@ public record ExportedRuns(Case c, ReplayPusher pusher, ReplayGuidingCenter gc) 
             }
             List<Integer> phases = new ArrayList<>();
             run.withArray("phases").forEach(p -> phases.add(p.asInt()));
-            Map<Integer, TrajectoryFile.Series> series = TrajectoryFile.read(
-                    trajectories.resolve(run.path("trajectory_file").asText()), phases, dt, steps);
+            Path csv = trajectories.resolve(run.path("trajectory_file").asText());
+            Path h5 = hdf5(csv);
+            Map<Integer, TrajectoryFile.Series> series = h5 != null ? Hdf5Trajectories.fullOrbit(h5, phases, dt, steps)
+                    : TrajectoryFile.read(csv, phases, dt, steps);
             List<TrajectoryFile.Series> byPhase = new ArrayList<>();
             for (int k = 0; k < s.x0().length; k++) {
                 TrajectoryFile.Series one = series.get(k);
@@ -93,7 +95,9 @@ public record ExportedRuns(Case c, ReplayPusher pusher, ReplayGuidingCenter gc) 
                         + "case again with this version");
             }
             String file = run.path("trajectory_file").asText();
-            GuidingCenterTrajectory t = GuidingCenterTrajectory.read(trajectories.resolve(file), dt, steps);
+            Path h5 = hdf5(trajectories.resolve(file));
+            GuidingCenterTrajectory t = h5 != null ? Hdf5Trajectories.guidingCenter(h5, dt, steps)
+                    : GuidingCenterTrajectory.read(trajectories.resolve(file), dt, steps);
             double sx = Math.max(Math.abs(g.x0()[0]), Math.max(Math.abs(g.x0()[1]), Math.abs(g.x0()[2])));
             for (int i = 0; i < 3; i++) {
                 if (Math.abs(t.x()[0][i] - g.x0()[i]) > 1e-12 * sx) {
@@ -107,6 +111,13 @@ public record ExportedRuns(Case c, ReplayPusher pusher, ReplayGuidingCenter gc) 
             recordings.add(new ReplayGuidingCenter.Recording(dt, t));
         }
         return new ExportedRuns(c, null, new ReplayGuidingCenter(name, order, properties, recordings));
+    }
+
+    /** The .h5 file with the CSV's base name, when there is no CSV and there is one; else null. */
+    private static Path hdf5(Path csv) {
+        String n = csv.getFileName().toString();
+        Path h5 = csv.resolveSibling(n.endsWith(".csv") ? n.substring(0, n.length() - 4) + ".h5" : n + ".h5");
+        return !Files.exists(csv) && Files.exists(h5) ? h5 : null;
     }
 
     private static JsonNode manifest(Path caseDir) {
