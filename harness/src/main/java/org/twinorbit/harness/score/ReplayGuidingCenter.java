@@ -45,43 +45,21 @@ public final class ReplayGuidingCenter implements GuidingCenterIntegrator {
     }
 
     private static final class Stepper implements GuidingCenterStepper {
-        private final Field field;
-        private final double dt;
         private final GuidingCenterTrajectory s;
-        private int i;
-        private OrbitStatus status = OrbitStatus.OK;
+        private final Playback play;
 
         Stepper(Field field, double dt, GuidingCenterTrajectory s) {
-            this.field = field;
-            this.dt = dt;
             this.s = s;
+            this.play = new Playback(field, dt, s.x());
         }
 
-        @Override
-        public void start(double t0, double[] gc0, double pPar0) {
-            i = 0;
-        }
-
-        @Override
-        public boolean step() {
-            if (i + 1 >= s.size()) {
-                status = OrbitStatus.LOST;
-                return false;
-            }
-            double[] x = s.x()[i + 1];
-            if (!field.inDomain(x[0], x[1], x[2])) {
-                status = OrbitStatus.LOST;
-                return false;
-            }
-            i++;
-            return true;
-        }
-
-        @Override public OrbitStatus status() { return status; }
-        @Override public double time() { return i * dt; }
-        @Override public void position(double[] out) { System.arraycopy(s.x()[i], 0, out, 0, 3); }
-        @Override public double parallelMomentum() { return s.pPar()[i]; }
-        @Override public long steps() { return i; }
-        @Override public long fieldEvaluations() { return i; }
+        @Override public void start(double t0, double[] gc0, double pPar0) { }
+        @Override public boolean step() { return play.advance(); }
+        @Override public OrbitStatus status() { return play.status(); }
+        @Override public double time() { return play.time(); }
+        @Override public void position(double[] out) { System.arraycopy(s.x()[play.index()], 0, out, 0, 3); }
+        @Override public double parallelMomentum() { return s.pPar()[play.index()]; }
+        @Override public long steps() { return play.index(); }
+        @Override public long fieldEvaluations() { return play.index(); }
     }
 }

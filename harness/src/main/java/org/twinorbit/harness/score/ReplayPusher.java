@@ -82,8 +82,7 @@ public final class ReplayPusher implements FullOrbitPusher {
         private final Field field;
         private final double dt;
         private TrajectoryFile.Series s;
-        private int i;
-        private OrbitStatus status = OrbitStatus.OK;
+        private Playback play;
 
         Stepper(Field field, double dt) {
             this.field = field;
@@ -93,30 +92,15 @@ public final class ReplayPusher implements FullOrbitPusher {
         @Override
         public void start(double t0, double[] x0, double[] u0) {
             s = find(dt, x0, u0);
-            i = 0;
+            play = new Playback(field, dt, s.x());
         }
 
-        @Override
-        public boolean step() {
-            if (i + 1 >= s.size()) {
-                // the file ends before the run: the outside code lost the particle
-                status = OrbitStatus.LOST;
-                return false;
-            }
-            double[] x = s.x()[i + 1];
-            if (!field.inDomain(x[0], x[1], x[2])) {
-                status = OrbitStatus.LOST;
-                return false;
-            }
-            i++;
-            return true;
-        }
-
-        @Override public OrbitStatus status() { return status; }
-        @Override public double time() { return i * dt; }
-        @Override public void position(double[] out) { System.arraycopy(s.x()[i], 0, out, 0, 3); }
-        @Override public void velocity(double[] out) { System.arraycopy(s.u()[i], 0, out, 0, 3); }
-        @Override public long steps() { return i; }
-        @Override public long fieldEvaluations() { return i; }
+        @Override public boolean step() { return play.advance(); }
+        @Override public OrbitStatus status() { return play.status(); }
+        @Override public double time() { return play.time(); }
+        @Override public void position(double[] out) { System.arraycopy(s.x()[play.index()], 0, out, 0, 3); }
+        @Override public void velocity(double[] out) { System.arraycopy(s.u()[play.index()], 0, out, 0, 3); }
+        @Override public long steps() { return play.index(); }
+        @Override public long fieldEvaluations() { return play.index(); }
     }
 }

@@ -23,11 +23,8 @@ final class OutsideCode {
 
     static void push(Path caseDir, FullOrbitPusher scheme) throws IOException {
         JsonNode m = new ObjectMapper().readTree(caseDir.resolve("manifest.json").toFile());
-        JsonNode c = m.get("case");
-        java.util.Map<String, Double> params = new java.util.LinkedHashMap<>();
-        c.get("field_parameters").fields().forEachRemaining(e -> params.put(e.getKey(), e.getValue().asDouble()));
-        Species s = Species.parse(c.get("species").asText());
-        Field f = Fields.create(c.get("field").asText(), params, s);
+        Species s = Species.parse(m.get("case").get("species").asText());
+        Field f = field(m, s);
         List<String> init = Files.readAllLines(caseDir.resolve("initial-states.csv"));
         for (JsonNode run : m.get("runs")) {
             double dt = run.get("dt_s").asDouble();
@@ -59,11 +56,8 @@ final class OutsideCode {
     static void pushGuidingCenter(Path caseDir, org.twinorbit.integrators.guidingcenter.GuidingCenterIntegrator scheme)
             throws IOException {
         JsonNode m = new ObjectMapper().readTree(caseDir.resolve("manifest.json").toFile());
-        JsonNode c = m.get("case");
-        java.util.Map<String, Double> params = new java.util.LinkedHashMap<>();
-        c.get("field_parameters").fields().forEachRemaining(e -> params.put(e.getKey(), e.getValue().asDouble()));
-        Species s = Species.parse(c.get("species").asText());
-        Field f = Fields.create(c.get("field").asText(), params, s);
+        Species s = Species.parse(m.get("case").get("species").asText());
+        Field f = field(m, s);
         JsonNode gc = m.get("guiding_center");
         JsonNode start = gc.get("start");
         double[] x0 = {start.get("x_m").get(0).asDouble(), start.get("x_m").get(1).asDouble(),
@@ -87,5 +81,13 @@ final class OutsideCode {
             }
             Files.writeString(caseDir.resolve(run.get("trajectory_file").asText()), sb.toString());
         }
+    }
+
+    /** The field the manifest names, with its parameters. */
+    private static Field field(JsonNode m, Species s) {
+        JsonNode c = m.get("case");
+        java.util.Map<String, Double> params = new java.util.LinkedHashMap<>();
+        c.get("field_parameters").fields().forEachRemaining(e -> params.put(e.getKey(), e.getValue().asDouble()));
+        return Fields.create(c.get("field").asText(), params, s);
     }
 }

@@ -28,6 +28,11 @@ public final class SkewedBorisPusher implements FullOrbitPusher {
 
     @Override
     public FullOrbitStepper stepper(Field field, Species species, double dt) {
+        return skewed(field, species, dt, SKEW);
+    }
+
+    /** The scheme with its rotation factor multiplied by 1 + skew. */
+    static FullOrbitStepper skewed(Field field, Species species, double dt, double skew) {
         return new SimpleStepper(field, species, dt) {
             final double[] mid = new double[3];
 
@@ -44,7 +49,7 @@ public final class SkewedBorisPusher implements FullOrbitPusher {
                 u[2] += h * f.ez;
                 double g = 1.0 / inverseGamma();
                 double tx = h * f.bx / g, ty = h * f.by / g, tz = h * f.bz / g;
-                double s = 2.0 / (1.0 + tx * tx + ty * ty + tz * tz) * (1 + SKEW);
+                double s = 2.0 / (1.0 + tx * tx + ty * ty + tz * tz) * (1 + skew);
                 double px = u[0] + (u[1] * tz - u[2] * ty);
                 double py = u[1] + (u[2] * tx - u[0] * tz);
                 double pz = u[2] + (u[0] * ty - u[1] * tx);
