@@ -39,7 +39,8 @@ public final class CaseOptions {
             description = "Initial guiding-center position (m); default: the field's.")
     List<Double> start;
 
-    @Option(names = "--energy", paramLabel = "EV", description = "Kinetic energy (eV; default 1e4 unless --eps).")
+    @Option(names = "--energy", paramLabel = "E", converter = EnergyConverter.class,
+            description = "Kinetic energy: eV, or with a unit (20keV, 1.5MeV; default 1e4 eV unless --eps).")
     Double energy;
 
     @Option(names = "--eps", paramLabel = "EPS", description = "eps = rho0/L in (0, 1) instead of --energy.")

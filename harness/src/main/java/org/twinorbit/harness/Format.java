@@ -24,4 +24,47 @@ public final class Format {
         }
         return String.format(Locale.ROOT, "%.3e", v);
     }
+
+    /** An energy for people: three significant digits in eV, keV, MeV or GeV ("34.6 keV"). */
+    public static String energy(double eV) {
+        if (!Double.isFinite(eV)) {
+            return number(eV);
+        }
+        String[] units = {"eV", "keV", "MeV", "GeV", "TeV"};
+        double v = eV;
+        int u = 0;
+        while (Math.abs(v) >= 1000 && u < units.length - 1) {
+            v /= 1000;
+            u++;
+        }
+        return String.format(Locale.ROOT, Math.abs(v) >= 100 ? "%.0f %s" : Math.abs(v) >= 10 ? "%.1f %s" : "%.2f %s", v,
+                units[u]);
+    }
+
+    /**
+     * An energy as typed: a number in eV, or with a unit eV, keV, MeV or GeV (case-insensitive,
+     * with or without a space: "30keV", "1.5 MeV").
+     *
+     * @throws IllegalArgumentException naming {@code option} and the accepted forms
+     */
+    public static double parseEnergy(String text, String option) {
+        String t = text.trim();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("(?i)^([-+0-9.eE]+)\\s*(ev|kev|mev|gev)?$").matcher(t);
+        if (m.matches()) {
+            try {
+                double v = Double.parseDouble(m.group(1));
+                String unit = m.group(2) == null ? "ev" : m.group(2).toLowerCase(Locale.ROOT);
+                return v * switch (unit) {
+                    case "kev" -> 1e3;
+                    case "mev" -> 1e6;
+                    case "gev" -> 1e9;
+                    default -> 1.0;
+                };
+            } catch (NumberFormatException e) {
+                // falls through to the message
+            }
+        }
+        throw new IllegalArgumentException(option + ": '" + text + "' is not an energy; give eV as a number or with a "
+                + "unit: 2e4, 20keV, 1.5MeV, 3GeV");
+    }
 }

@@ -70,9 +70,17 @@ public final class ScanCommand implements Runnable {
             description = "Number of eps values, log-spaced (default: ${DEFAULT-VALUE}).")
     int points;
 
-    @Option(names = "--energy", paramLabel = "EV",
-            description = "Fixed kinetic energy in eV of a ramp or wave scan (default: per field).")
+    @Option(names = "--energy", paramLabel = "E", converter = org.twinorbit.harness.EnergyConverter.class,
+            description = "Fixed kinetic energy of a ramp or wave scan: eV, or with a unit (default: per field).")
     Double energy;
+
+    @Option(names = "--energy-min", paramLabel = "E", converter = org.twinorbit.harness.EnergyConverter.class,
+            description = "Smallest kinetic energy (eV, or 20keV, 1.5MeV): the range in energy instead of --eps-min.")
+    Double energyMin;
+
+    @Option(names = "--energy-max", paramLabel = "E", converter = org.twinorbit.harness.EnergyConverter.class,
+            description = "Largest kinetic energy (eV, or with a unit) instead of --eps-max.")
+    Double energyMax;
 
     @Option(names = "--start", split = ",", paramLabel = "X,Y,Z", hideParamSyntax = true,
             description = "Initial guiding center in m (default: the field's; r = 0.2 Lm in the mirror's midplane; r = 3 rho0 in the ramp).")
@@ -220,6 +228,8 @@ public final class ScanCommand implements Runnable {
         q.pitches = pitches;
         q.epsMin = epsMin;
         q.epsMax = epsMax;
+        q.energyMin = energyMin;
+        q.energyMax = energyMax;
         q.points = points;
         q.energyEv = energy;
         q.start = start;
@@ -270,10 +280,13 @@ public final class ScanCommand implements Runnable {
         for (Threshold t : r.thresholds()) {
             String at = t.outcome().hasEpsStar()
                     ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())
-                    + (Double.isNaN(t.energyEvStar()) ? "" : ", " + Format.number(t.energyEvStar()) + " eV")
+                    + (Double.isNaN(t.energyEvStar()) ? "" : ", " + Format.energy(t.energyEvStar()))
                     : t.outcome().label();
             w.printf("%-20s tol %-8s pitch %-5s %s%n", t.metric().key(), Format.number(t.tolerance()),
                     Format.number(t.pitchDeg()), at);
+        }
+        for (String line : ScanAnswer.lines(r)) {
+            w.println(line);
         }
     }
 }

@@ -27,6 +27,9 @@ public final class ScanRequest {
     public List<Double> pitches;
     public Double epsMin;
     public Double epsMax;
+    /** The range in kinetic energy (eV) instead of ε, for fields scanned through the energy. */
+    public Double energyMin;
+    public Double energyMax;
     public int points = 16;
     public Double energyEv;
     public List<Double> start;
@@ -62,11 +65,37 @@ public final class ScanRequest {
             throw new IllegalArgumentException("--field-param " + recipe.parameter() + ": the scan sets it from eps; "
                     + "choose the range with --eps-min and --eps-max instead");
         }
+        if ((energyMin != null && epsMin != null) || (energyMax != null && epsMax != null)) {
+            throw new IllegalArgumentException("--energy-min/--energy-max and --eps-min/--eps-max: give the range one way");
+        }
+        if ((energyMin != null || energyMax != null) && recipe.timeScale()) {
+            throw new IllegalArgumentException("--energy-min/--energy-max: field '" + field + "' is scanned in its time "
+                    + "scale at a fixed energy (--energy); give the range with --eps-min and --eps-max");
+        }
         double lo = epsMin != null ? epsMin : recipe.epsMin();
         double hi = epsMax != null ? epsMax : recipe.epsMax();
-        double[] eps = EpsilonGrid.logSpaced(lo, hi, points);
         Field f = Fields.create(field, recipe.parametersAt(parameters, lo), species);
         Vec3 x0 = start(f, recipe);
+        if (energyMin != null || energyMax != null) {
+            EnergyScale scale = new EnergyScale(f, species, x0);
+            for (Double e : new Double[] {energyMin, energyMax}) {
+                if (e != null && !(e > 0 && Double.isFinite(e))) {
+                    throw new IllegalArgumentException("--energy-min/--energy-max must be finite energies > 0 eV, got " + e);
+                }
+            }
+            lo = energyMin != null ? scale.eps(energyMin) : lo;
+            hi = energyMax != null ? scale.eps(energyMax) : hi;
+            if (!(hi < 1)) {
+                throw new IllegalArgumentException("--energy-max: " + org.twinorbit.harness.Format.energy(energyMax)
+                        + " gives eps = " + org.twinorbit.harness.Format.number(hi) + " >= 1 in field '" + field
+                        + "'; the guiding-center model needs eps < 1, so the largest energy is "
+                        + org.twinorbit.harness.Format.energy(scale.energyEv(0.99)));
+            }
+            if (!(lo < hi)) {
+                throw new IllegalArgumentException("--energy-min must lie below --energy-max (as eps: " + lo + " >= " + hi + ")");
+            }
+        }
+        double[] eps = EpsilonGrid.logSpaced(lo, hi, points);
         List<Double> pitch = pitches != null ? List.copyOf(pitches) : List.of(recipe.pitchDeg());
         if (pitch.isEmpty()) {
             throw new IllegalArgumentException("--pitch: give at least one pitch angle in [0, 180] degrees");

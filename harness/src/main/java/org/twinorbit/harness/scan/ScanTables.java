@@ -84,6 +84,11 @@ public final class ScanTables {
                 .append("its starting distance, where there is a sheet and the start is off it, else for 50 gyroperiods. ")
                 .append("`*_reference_error_rho` is each reference's self-estimated error (a run at 100 times tighter ")
                 .append("tolerance), `*_evaluations` its field evaluations per orbit.\n\n");
+        sb.append("## Answer\n\n");
+        for (String line : ScanAnswer.lines(r)) {
+            sb.append("- ").append(line).append('\n');
+        }
+        sb.append('\n');
         sb.append("## Thresholds\n\n");
         String derived = r.axis().derivedName();
         sb.append("| metric | tolerance | statistic | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
