@@ -28,8 +28,8 @@ public final class CaseOptions {
     String field;
 
     @Option(names = {"-P", "--field-param"}, paramLabel = "NAME=VALUE",
-            description = "Override a field parameter, in its unit (repeatable).")
-    Map<String, Double> fieldParameters;
+            description = "Override a field parameter, in its unit (repeatable, each name once).")
+    List<String> fieldParameters;
 
     @Option(names = "--species", paramLabel = "NAME",
             description = "electron, positron, proton, deuteron, triton, helium-3, alpha, or mass,charge in kg,C (default proton).")
@@ -87,7 +87,7 @@ public final class CaseOptions {
         CaseSpec s = new CaseSpec();
         s.name = name;
         s.field = field;
-        s.fieldParameters = fieldParameters;
+        s.fieldParameters = fieldParameters == null ? null : OptionPairs.numbers(fieldParameters, "--field-param");
         s.species = species;
         s.start = start;
         s.energy = energy;

@@ -37,7 +37,7 @@ public final class ProbeCommand implements Callable<Integer> {
     String field;
 
     @Option(names = {"-P", "--field-param"}, paramLabel = "NAME=VALUE", description = "Override a field parameter, in its unit (repeatable).")
-    Map<String, Double> fieldParameters = new LinkedHashMap<>();
+    List<String> fieldParameters = new ArrayList<>();
 
     @Option(names = "--species", paramLabel = "NAME", defaultValue = "proton",
             description = "Species, for fields whose time scale depends on it (ramp, wave; default ${DEFAULT-VALUE}).")
@@ -62,7 +62,7 @@ public final class ProbeCommand implements Callable<Integer> {
     public Integer call() {
         Field f;
         try {
-            f = Fields.create(field, fieldParameters, Species.parse(species));
+            f = Fields.create(field, parameters(), Species.parse(species));
         } catch (FieldParameterException e) {
             throw new BadInputException("field-param: " + e.getMessage());
         }
@@ -101,7 +101,7 @@ public final class ProbeCommand implements Callable<Integer> {
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
             doc.put("field", field);
-            doc.put("field_parameters", new LinkedHashMap<>(fieldParameters));
+            doc.put("field_parameters", parameters());
             doc.put("points", rows);
             out.print(ResultJson.write(ToolInfo.stamped(doc)));
         } else {
@@ -109,6 +109,10 @@ public final class ProbeCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    private Map<String, Double> parameters() {
+        return OptionPairs.numbers(fieldParameters, "--field-param");
     }
 
     private double[] point(String text, String where) {

@@ -19,7 +19,11 @@ import org.twinorbit.harness.BadInputException;
  */
 public final class CaseFile {
 
-    private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory())
+    /** The largest case file read (bytes): a case is a few hundred bytes; anything huge is not one. */
+    static final long MAX_BYTES = 1 << 20;
+
+    private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory()
+            .enable(com.fasterxml.jackson.core.JsonParser.Feature.STRICT_DUPLICATE_DETECTION))
             .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
             .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
             .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT);
@@ -30,9 +34,18 @@ public final class CaseFile {
     public static CaseSpec read(Path file) {
         String text;
         try {
+            if (Files.exists(file) && !Files.isRegularFile(file)) {
+                throw new BadInputException("--case: " + file + " is not a regular file");
+            }
+            if (Files.exists(file) && Files.size(file) > MAX_BYTES) {
+                throw new BadInputException("--case: " + file + " is " + Files.size(file) + " bytes; a case file is "
+                        + "small YAML (at most " + MAX_BYTES + " bytes)");
+            }
             text = Files.readString(file);
         } catch (NoSuchFileException e) {
             throw new BadInputException("--case: no such file " + file);
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new BadInputException("--case: " + file + " is not UTF-8 text");
         } catch (IOException e) {
             throw new BadInputException("--case: cannot read " + file + ": " + e.getMessage());
         }

@@ -47,8 +47,8 @@ public final class ScanCommand implements Runnable {
     boolean safeUse;
 
     @Option(names = {"-P", "--field-param"}, paramLabel = "NAME=VALUE",
-            description = "Field parameter override, repeatable (e.g. -P Rm=8).")
-    Map<String, Double> params = new LinkedHashMap<>();
+            description = "Field parameter override, repeatable, each name once (e.g. -P Rm=8).")
+    List<String> params = new java.util.ArrayList<>();
 
     @Option(names = "--species", defaultValue = "proton", paramLabel = "NAME",
             description = "Particle: electron, positron, proton, deuteron, triton, helium-3, alpha, or mass,charge "
@@ -101,7 +101,7 @@ public final class ScanCommand implements Runnable {
             description = "Tolerance(s) of a metric at which eps* is found, repeatable; metrics: mu_jump (1%%), "
                     + "drift_error (5%%), position_error_rho (1 rho0), bounce_period_error (1%%), class_change (0), "
                     + "mu_change, mirror_field_error (none by default). Metrics not named keep their default.")
-    Map<String, String> tolerances = new LinkedHashMap<>();
+    List<String> tolerances = new java.util.ArrayList<>();
 
     @Option(names = "--statistic", paramLabel = "STAT", description = "Summary over the gyrophase ensemble that a "
             + "tolerance is compared with: worst (largest magnitude over the phases), mean (phase mean of the signed "
@@ -199,6 +199,9 @@ public final class ScanCommand implements Runnable {
 
     /** Makes --out, after every other option has been checked and before any orbit runs. */
     private void prepareOut() {
+        if (out.toString().isBlank()) {
+            throw new IllegalArgumentException("--out: give a directory (an empty --out= would write into the current one)");
+        }
         try {
             java.nio.file.Files.createDirectories(out);
         } catch (java.io.IOException e) {
@@ -223,7 +226,7 @@ public final class ScanCommand implements Runnable {
     public ScanRequest.Built setup() {
         ScanRequest q = new ScanRequest();
         q.field = field;
-        q.parameters = new LinkedHashMap<>(params);
+        q.parameters = org.twinorbit.harness.OptionPairs.numbers(params, "--field-param");
         q.species = Species.parse(species);
         q.pitches = pitches;
         q.epsMin = epsMin;
@@ -256,7 +259,7 @@ public final class ScanCommand implements Runnable {
     /** The --tolerance options parsed; the request checks their values. */
     private Map<ScanMetric, List<Double>> tolerances() {
         Map<ScanMetric, List<Double>> tol = new LinkedHashMap<>();
-        for (Map.Entry<String, String> e : tolerances.entrySet()) {
+        for (Map.Entry<String, String> e : org.twinorbit.harness.OptionPairs.of(tolerances, "--tolerance").entrySet()) {
             ScanMetric m;
             try {
                 m = ScanMetric.ofKey(e.getKey());
