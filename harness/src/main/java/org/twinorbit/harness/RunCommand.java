@@ -40,6 +40,9 @@ public final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Also write run.md, run.csv, run.json and PNG plots into DIR.")
     Path out;
 
+    @Option(names = "--allow-long", description = "Start a run beyond about 5e9 full-orbit steps (refused otherwise).")
+    boolean allowLong;
+
     @Option(names = "--json", description = "Print run.json on stdout instead of the table.")
     boolean json;
 
@@ -55,7 +58,8 @@ public final class RunCommand implements Callable<Integer> {
             OutputDirectory.prepare(out);
         }
         long t0 = System.nanoTime();
-        CaseResult r = new CaseRunner(threads, execution.quiet()).run(c);
+        CaseRunner runner = new CaseRunner(threads, execution.quiet());
+        CaseResult r = (allowLong ? runner.allowingLong() : runner).run(c);
         List<RowVerdict> verdicts = Verdicts.judge(r);
         String total = String.format(java.util.Locale.ROOT, "%s in %.1f s on %d threads", r.resolved().spec().name(),
                 (System.nanoTime() - t0) * 1e-9, threads);

@@ -58,4 +58,21 @@ class BadInputHolesTest {
         refused("--out: give a directory", "scan", "--field", "mirror", "--out=");
         assertFalse(Files.exists(Path.of("scan.md")), "nothing written into the working directory");
     }
+
+    /** Work far beyond anything intended is estimated and refused before it starts. */
+    @Test
+    void hugeWorkIsRefusedWithoutAllowLong() {
+        long t0 = System.nanoTime();
+        refused("--allow-long", "run", "--field", "uniform", "--duration", "1e7");
+        refused("beyond the 1000 a scan runs without --allow-long", "scan", "--field", "mirror", "--points", "100000",
+                "--out", tmp.toString());
+        assertTrue((System.nanoTime() - t0) * 1e-9 < 30, "refused before any orbit ran");
+    }
+
+    /** A bounce count on a field whose orbits never mirror would silently run gyroperiods instead. */
+    @Test
+    void bouncesOnAFieldWithoutBouncesAreRefused() {
+        refused("orbits in field 'gradient' do not bounce", "scan", "--field", "gradient", "--duration-unit", "bounces",
+                "--out", tmp.toString());
+    }
 }

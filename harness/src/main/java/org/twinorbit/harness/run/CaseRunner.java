@@ -70,6 +70,15 @@ public final class CaseRunner {
     private final List<FullOrbitPusher> instances;
     /** Guiding-center integrators given as instances, run beside the case's named ones. */
     private final List<GuidingCenterIntegrator> gcInstances;
+    /** Whether work beyond {@link #MAX_STEPS} may start. */
+    private boolean allowLong;
+
+    /**
+     * Full-orbit steps (over every pusher, phase and reference) a set of cases may take without
+     * {@link #allowingLong()}: about an hour on two cores; beyond it a typo (a duration of 1e9)
+     * is likelier than intent.
+     */
+    public static final double MAX_STEPS = 5e9;
 
     /** @param threads worker threads (≥ 1) @param quiet no progress bar */
     public CaseRunner(int threads, boolean quiet) {
@@ -93,6 +102,13 @@ public final class CaseRunner {
      */
     public CaseRunner with(List<FullOrbitPusher> pushers) {
         return new CaseRunner(threads, quiet, pushers, gcInstances);
+    }
+
+    /** This runner, allowed to start work beyond {@link #MAX_STEPS}. */
+    public CaseRunner allowingLong() {
+        CaseRunner r = new CaseRunner(threads, quiet, instances, gcInstances);
+        r.allowLong = true;
+        return r;
     }
 
     /** A runner that also runs these guiding-center integrator instances in every case. */
@@ -133,8 +149,19 @@ public final class CaseRunner {
             new Parallel(threads, quiet, "bounce periods").run(pre);
         }
         List<Parallel.Job> jobs = new ArrayList<>();
+        double total = 0;
         for (Plan p : plans) {
             p.schedule();
+            // each reference sample costs about FO_REFERENCE_SAMPLE pusher steps
+            total += (double) p.n * p.x0.length * (p.pushers.size() + 2)
+                    + (double) p.samples * p.x0.length * FO_REFERENCE_SAMPLE * 2;
+        }
+        if (total > MAX_STEPS && !allowLong) {
+            throw new BadInputException(String.format(java.util.Locale.ROOT, "duration: the run would take about %.1e "
+                    + "full-orbit steps (all pushers, phases and references), beyond the %.0e that start without "
+                    + "--allow-long; shorten --duration or --phases, or confirm with --allow-long", total, MAX_STEPS));
+        }
+        for (Plan p : plans) {
             List<Parallel.Job> own = new ArrayList<>();
             p.addJobs(own);
             // the job that finishes a case assembles it; the counter orders the slots' writes before it

@@ -74,6 +74,9 @@ public final class ScanCommand implements Runnable {
             description = "Fixed kinetic energy of a ramp or wave scan: eV, or with a unit (default: per field).")
     Double energy;
 
+    @Option(names = "--allow-long", description = "Run a scan of more than 1000 points per pitch (refused otherwise).")
+    boolean allowLong;
+
     @Option(names = "--energy-min", paramLabel = "E", converter = org.twinorbit.harness.EnergyConverter.class,
             description = "Smallest kinetic energy (eV, or 20keV, 1.5MeV): the range in energy instead of --eps-min.")
     Double energyMin;
@@ -231,6 +234,7 @@ public final class ScanCommand implements Runnable {
         q.pitches = pitches;
         q.epsMin = epsMin;
         q.epsMax = epsMax;
+        q.allowLong = allowLong;
         q.energyMin = energyMin;
         q.energyMax = energyMax;
         q.points = points;

@@ -27,6 +27,10 @@ public final class ScanRequest {
     public List<Double> pitches;
     public Double epsMin;
     public Double epsMax;
+    /** Most ε points a scan runs without {@link #allowLong}. */
+    public static final int MAX_POINTS = 1000;
+    /** The user confirmed a scan beyond {@link #MAX_POINTS} points. */
+    public boolean allowLong;
     /** The range in kinetic energy (eV) instead of ε, for fields scanned through the energy. */
     public Double energyMin;
     public Double energyMax;
@@ -110,6 +114,17 @@ public final class ScanRequest {
         }
         ScanDuration d = new ScanDuration(duration != null ? duration : recipe.duration().value(),
                 durationUnit != null ? durationUnit : recipe.duration().unit());
+        if (d.unit() == ScanDuration.Unit.BOUNCES && recipe.duration().unit() != ScanDuration.Unit.BOUNCES) {
+            // the recipes count bounces exactly for the fields whose orbits mirror (mirror, dipole,
+            // tokamak, current sheet); elsewhere every point would silently run gyroperiods instead
+            throw new IllegalArgumentException("--duration-unit bounces: orbits in field '" + field + "' do not bounce; "
+                    + "use gyroperiods" + (recipe.timeScale() ? " or field-periods" : ""));
+        }
+        if (points > MAX_POINTS && !allowLong) {
+            throw new IllegalArgumentException("--points: " + points + " points (times " + (pitches == null ? 1
+                    : pitches.size()) + " pitch(es)) is beyond the " + MAX_POINTS + " a scan runs without "
+                    + "--allow-long; each point runs every gyrophase through both references");
+        }
         if (d.unit() == ScanDuration.Unit.FIELD_PERIODS && !recipe.timeScale()) {
             throw new IllegalArgumentException("--duration-unit field-periods needs a time-dependent field (ramp, wave); "
                     + "field '" + field + "' is static: use gyroperiods or bounces");
