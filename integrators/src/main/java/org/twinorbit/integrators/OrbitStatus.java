@@ -9,7 +9,9 @@ public enum OrbitStatus {
     /** The state became NaN or infinite, or the energy blew up: the integrator failed. */
     UNSTABLE("unstable"),
     /** The guiding-center model itself broke down (B*∥ ≤ 0). */
-    MODEL_FAILURE("model-failure");
+    MODEL_FAILURE("model-failure"),
+    /** The integrator threw an exception: its code failed, not the orbit. */
+    FAILED("failed");
 
     private final String label;
 

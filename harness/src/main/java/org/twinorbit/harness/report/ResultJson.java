@@ -39,7 +39,7 @@ import org.twinorbit.harness.verdict.Verdicts;
  *             in bounces, else null), full_orbit_dt_s, gc_dt_s
  * results:    one object per integrator, then the model row:
  *             integrator, model (full-orbit | guiding-center), error_kind (discretisation | model),
- *             status (ok | lost | unstable | model-failure, the worst over the ensemble; the
+ *             status (ok | lost | unstable | model-failure | failed (the integrator threw), the worst over the ensemble; the
  *             model row also lost-full-orbit | lost-guiding-center | unstable-full-orbit when
  *             the two models disagree, plain lost only when both lost the particle),
  *             status_time_s (when that status was reached, earliest phase; null when ok),

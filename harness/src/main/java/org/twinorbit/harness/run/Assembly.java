@@ -117,7 +117,7 @@ final class Assembly {
             rows.add(row(p.pushers.get(i).name(), "full-orbit", "discretisation", st, ends, m, muFrom, inv, cls, refCls,
                     order(dts, errs, convSelf), dts, errs, steps / nph, evals / nph, wall,
                     new Diagnostics(runaway, halves[0], halves[1], localOrders(dts, errs, convSelf),
-                            p.pushers.get(i).order(), p.pushers.get(i).properties())));
+                            p.pushers.get(i).order(), p.pushers.get(i).properties(), failure(p.fo[i], p.foConv[i]))));
         }
 
         // guiding-center rows: the ensemble shares one guiding center, so one run stands for all phases
@@ -154,7 +154,7 @@ final class Assembly {
                     cls, refCls, order(dts, errs, gcSelf), dts, errs, r.outcome().steps(),
                     r.outcome().fieldEvaluations(), wall, new Diagnostics(Runaway.guidingCenter(tr, refTr, p.speed),
                             Double.NaN, Double.NaN, localOrders(dts, errs, gcSelf), p.gcs.get(gi).order(),
-                            p.gcs.get(gi).properties())));
+                            p.gcs.get(gi).properties(), gcFailure(runs))));
         }
 
         // model error: guiding-center reference against the gyro-averaged full-orbit reference
@@ -249,6 +249,27 @@ final class Assembly {
         }
         return OrbitMetrics.driftError(OrbitMetrics.meanPerpendicularVelocity(f, tr, ta, tb, coarse),
                 OrbitMetrics.meanPerpendicularVelocity(f, refTr, ta, tb, coarse), floor);
+    }
+
+    /** What the first failed run of a pusher threw; null when none failed. */
+    private static String failure(FullOrbitRecord[] main, FullOrbitRecord[] sweep) {
+        for (FullOrbitRecord[] set : new FullOrbitRecord[][] {main, sweep}) {
+            for (FullOrbitRecord r : set) {
+                if (r != null && r.outcome().failure() != null) {
+                    return r.outcome().failure();
+                }
+            }
+        }
+        return null;
+    }
+
+    private static String gcFailure(GuidingCenterRecord[] runs) {
+        for (GuidingCenterRecord r : runs) {
+            if (r != null && r.outcome().failure() != null) {
+                return r.outcome().failure();
+            }
+        }
+        return null;
     }
 
     /** The larger of two strays; NaN (not measured) counts as none. */
@@ -365,6 +386,7 @@ final class Assembly {
             case LOST -> 1;
             case MODEL_FAILURE -> 2;
             case UNSTABLE -> 3;
+            case FAILED -> 4;
         };
     }
 

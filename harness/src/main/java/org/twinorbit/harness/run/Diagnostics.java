@@ -14,11 +14,12 @@ package org.twinorbit.harness.run;
  *                         fewer than three such points
  * @param declaredOrder    the order the integrator declares; 0 for the model row
  * @param properties       the properties it declares ("time-reversible", "relativistic", ...)
+ * @param failure          what the integrator threw in its first failed run; null when none failed
  */
 public record Diagnostics(double runaway, double energyFirstHalf, double energySecondHalf, double[] localOrders,
-                          int declaredOrder, java.util.Set<String> properties) {
+                          int declaredOrder, java.util.Set<String> properties, String failure) {
 
     /** No facts (the model row). */
     public static final Diagnostics NONE = new Diagnostics(Double.NaN, Double.NaN, Double.NaN, new double[0], 0,
-            java.util.Set.of());
+            java.util.Set.of(), null);
 }

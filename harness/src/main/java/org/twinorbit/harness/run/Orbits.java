@@ -60,29 +60,50 @@ public final class Orbits {
         long t0 = System.nanoTime();
         FullOrbitWatch watch = new FullOrbitWatch(field, s, stride, deadband);
         watch.energy.splitAt(0.5 * n * dt);
-        FullOrbitStepper st = pusher.stepper(field, s, dt);
-        st.start(0.0, x0.clone(), u0.clone());
-        double[] x = new double[3];
-        double[] u = new double[3];
-        st.position(x);
-        st.velocity(u);
-        watch.observe(st.time(), x, u);
-        OrbitStatus status = OrbitStatus.OK;
-        for (long i = 0; i < n; i++) {
-            if (!st.step()) {
-                status = st.status();
-                break;
-            }
+        FullOrbitStepper st = null;
+        try {
+            st = pusher.stepper(field, s, dt);
+            st.start(0.0, x0.clone(), u0.clone());
+            double[] x = new double[3];
+            double[] u = new double[3];
             st.position(x);
             st.velocity(u);
             watch.observe(st.time(), x, u);
-            if (watch.energy.blownUp()) {
-                status = OrbitStatus.UNSTABLE;
-                break;
+            OrbitStatus status = OrbitStatus.OK;
+            for (long i = 0; i < n; i++) {
+                if (!st.step()) {
+                    status = st.status();
+                    break;
+                }
+                st.position(x);
+                st.velocity(u);
+                watch.observe(st.time(), x, u);
+                if (watch.energy.blownUp()) {
+                    status = OrbitStatus.UNSTABLE;
+                    break;
+                }
             }
+            return watch.record(new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0));
+        } catch (RuntimeException e) {
+            // the pusher's own code failed: its row says so, every other orbit goes on
+            return watch.record(failed(e, st, t0));
         }
-        Outcome o = new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0);
-        return watch.record(o);
+    }
+
+    /** The outcome of an integrator that threw: status failed, with what it threw. */
+    private static Outcome failed(RuntimeException e, FullOrbitStepper st, long t0) {
+        double t = 0;
+        long steps = 0;
+        try {
+            if (st != null) {
+                t = st.time();
+                steps = st.steps();
+            }
+        } catch (RuntimeException ignored) {
+            // the stepper that threw may not answer either
+        }
+        return new Outcome(OrbitStatus.FAILED, t, steps, steps, System.nanoTime() - t0,
+                e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()));
     }
 
     /**
@@ -95,25 +116,31 @@ public final class Orbits {
                                               double deadband) {
         long t0 = System.nanoTime();
         GuidingCenterRecorder rec = new GuidingCenterRecorder(field, s, mu, stride, deadband);
-        GuidingCenterStepper st = integrator.stepper(field, s, mu, dt);
-        st.start(0.0, gc0.clone(), pPar0);
-        double[] x = new double[3];
-        st.position(x);
-        rec.observe(st.time(), x, st.parallelMomentum());
-        OrbitStatus status = OrbitStatus.OK;
-        for (long i = 0; i < n; i++) {
-            if (!st.step()) {
-                status = st.status();
-                break;
-            }
+        double[] x = gc0.clone();
+        GuidingCenterStepper st = null;
+        try {
+            st = integrator.stepper(field, s, mu, dt);
+            st.start(0.0, gc0.clone(), pPar0);
             st.position(x);
             rec.observe(st.time(), x, st.parallelMomentum());
-            if (rec.blownUp()) {
-                status = OrbitStatus.UNSTABLE;
-                break;
+            OrbitStatus status = OrbitStatus.OK;
+            for (long i = 0; i < n; i++) {
+                if (!st.step()) {
+                    status = st.status();
+                    break;
+                }
+                st.position(x);
+                rec.observe(st.time(), x, st.parallelMomentum());
+                if (rec.blownUp()) {
+                    status = OrbitStatus.UNSTABLE;
+                    break;
+                }
             }
+            Outcome o = new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0);
+            return new GuidingCenterRecord(o, rec, x.clone(), st.time(), java.util.List.of());
+        } catch (RuntimeException e) {
+            Outcome o = failed(e, null, t0);
+            return new GuidingCenterRecord(o, rec, x.clone(), o.endTime(), java.util.List.of());
         }
-        Outcome o = new Outcome(status, st.time(), st.steps(), st.fieldEvaluations(), System.nanoTime() - t0);
-        return new GuidingCenterRecord(o, rec, x.clone(), st.time(), java.util.List.of());
     }
 }

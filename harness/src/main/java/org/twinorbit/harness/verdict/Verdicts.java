@@ -62,7 +62,9 @@ public final class Verdicts {
         int declared = d.declaredOrder();
         Set<String> properties = d.properties();
         List<Finding> f = new ArrayList<>();
-        if (!row.status().equals("ok") && !row.status().equals("lost")) {
+        if (d.failure() != null) {
+            f.add(new Finding(Check.STABLE, true, "failed (the integrator threw " + d.failure() + ")", false));
+        } else if (!row.status().equals("ok") && !row.status().equals("lost")) {
             f.add(new Finding(Check.STABLE, true, row.status() + " at "
                     + Format.number(row.statusTime() / r.resolved().gyroPeriod()) + " Tc", false));
         }
