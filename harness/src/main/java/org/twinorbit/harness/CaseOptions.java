@@ -6,7 +6,6 @@ import java.util.Map;
 import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.cases.CaseFile;
 import org.twinorbit.harness.cases.CaseSpec;
-import org.twinorbit.harness.cases.DurationUnit;
 import org.twinorbit.harness.run.Registry;
 import picocli.CommandLine.Option;
 
@@ -56,8 +55,8 @@ public final class CaseOptions {
     Double duration;
 
     @Option(names = "--duration-unit", paramLabel = "UNIT",
-            description = "What --duration counts: ${COMPLETION-CANDIDATES} (default GYROPERIODS).")
-    DurationUnit durationUnit;
+            description = "What --duration counts: gyroperiods, bounces or crossings (default gyroperiods).")
+    String durationUnit;
 
     @Option(names = "--pushers", split = ",", paramLabel = "NAMES",
             description = "Full-orbit pushers, comma-separated, 'all' or 'none' (default all; see 'twinorbit integrators').")
@@ -95,7 +94,7 @@ public final class CaseOptions {
         s.pitch = pitch;
         s.phases = phases;
         s.duration = duration;
-        s.durationUnit = durationUnit == null ? null : durationUnit.label();
+        s.durationUnit = durationUnit;
         s.pushers = pushers;
         s.stepsPerGyro = stepsPerGyro;
         s.gcIntegrators = gcIntegrators;

@@ -120,10 +120,19 @@ public final class ScanCommand implements Runnable {
             description = "Relative tolerance of both references (default: ${DEFAULT-VALUE}).")
     double referenceRtol = CaseSpec.DEFAULT_RTOL;
 
-    @Option(names = "--integrators", split = ",", paramLabel = "NAME",
-            description = "Pushers and guiding-center integrators (see 'twinorbit integrators') to run at their default "
-                    + "step beside the references, so that each point shows their discretisation error next to the "
-                    + "model error (default: none).")
+    @Option(names = "--pushers", split = ",", paramLabel = "NAMES",
+            description = "Full-orbit pushers (see 'twinorbit integrators') to run at their default step beside the "
+                    + "references, so that each point shows their discretisation error next to the model error "
+                    + "(default: none).")
+    List<String> pushers = new ArrayList<>();
+
+    @Option(names = "--gc-integrators", split = ",", paramLabel = "NAMES",
+            description = "Guiding-center integrators to run the same way (default: none).")
+    List<String> gcIntegrators = new ArrayList<>();
+
+    @Option(names = "--integrators", split = ",", paramLabel = "NAMES",
+            description = "The 0.1 spelling: pushers and guiding-center integrators in one list (as --pushers and "
+                    + "--gc-integrators).")
     List<String> integrators = new ArrayList<>();
 
     @Option(names = "--out", defaultValue = "scan-results", paramLabel = "DIR",
@@ -247,7 +256,10 @@ public final class ScanCommand implements Runnable {
         q.statistic = statistic();
         q.referenceRtol = referenceRtol;
         q.gcStart = GuidingCenterStart.parse(gcStart, "--gc-start");
-        q.integrators = integrators;
+        List<String> all = new ArrayList<>(pushers);
+        all.addAll(gcIntegrators);
+        all.addAll(integrators);
+        q.integrators = all;
         q.threads = execution.threads();
         return q.build();
     }

@@ -160,7 +160,7 @@ public final class ScanRequest {
             } else {
                 List<String> all = new ArrayList<>(Registry.pusherNames());
                 all.addAll(Registry.guidingCenterNames());
-                throw new IllegalArgumentException("--integrators: unknown integrator '" + name + "'; allowed: "
+                throw new IllegalArgumentException("--pushers/--gc-integrators: unknown integrator '" + name + "'; allowed: "
                         + String.join(", ", all));
             }
         }

@@ -53,7 +53,8 @@ class ScanCommandInputTest {
                 .contains("--statistic: unknown statistic 'median'; allowed: worst, mean, rms"));
         assertTrue(refused("--field", "gradient", "--duration-unit", "field-periods").contains("needs a time-dependent field"));
         assertTrue(refused("--field", "mirror", "--field-param", "Rm=0.5").contains("'Rm'"));
-        assertTrue(refused("--field", "mirror", "--integrators", "euler").contains("--integrators: unknown integrator 'euler'; allowed: "));
+        assertTrue(refused("--field", "mirror", "--integrators", "euler").contains("--pushers/--gc-integrators: unknown integrator 'euler'; allowed: "));
+        assertTrue(refused("--field", "mirror", "--pushers", "euler").contains("unknown integrator 'euler'"));
         assertTrue(refused("--field", "mirror", "--start", "0,0,2").contains("outside the domain"));
         assertTrue(refused("--field", "ramp", "--field-param", "tau_periods=5").contains("the scan sets it from eps"));
         assertTrue(refused("--field", "wave", "--eps-max", "0.9995").contains("cyclotron resonance"));
