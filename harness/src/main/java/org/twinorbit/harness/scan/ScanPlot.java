@@ -27,6 +27,23 @@ public final class ScanPlot {
 
     private static final int WIDTH = 640;
     private static final int HEIGHT = 600;
+    /** One colour per pitch angle, the same in every panel (lines, markers and ε* alike). */
+    private static final java.awt.Color[] PITCH_COLOURS = {new java.awt.Color(0x1f77b4), new java.awt.Color(0xd62728),
+        new java.awt.Color(0x2ca02c), new java.awt.Color(0x9467bd), new java.awt.Color(0xff7f0e),
+        new java.awt.Color(0x8c564b), new java.awt.Color(0xe377c2), new java.awt.Color(0x17becf)};
+
+    /** The y-axis title of a metric's panel, in words and symbols rather than its key. */
+    static String axisTitle(ScanMetric m) {
+        return switch (m) {
+            case MU_JUMP -> "\u03bc jump |\u0394\u27e8\u03bc\u27e9| / \u27e8\u03bc\u27e9";
+            case MU_CHANGE -> "\u03bc change |\u27e8\u03bc\u27e9k \u2212 \u27e8\u03bc\u27e90| / \u27e8\u03bc\u27e90";
+            case DRIFT_ERROR -> "drift error (v_GC \u2212 v_FO)\u00b7v_FO / |v_FO|\u00b2";
+            case POSITION_ERROR -> "position error per bounce / \u03c10";
+            case BOUNCE_ERROR -> "bounce period error T_GC / T_FO \u2212 1";
+            case MIRROR_FIELD_ERROR -> "mirror-point field error B_GC / B_FO \u2212 1";
+            case CLASS_CHANGE -> "class change";
+        };
+    }
 
     private ScanPlot() {}
 
@@ -63,32 +80,37 @@ public final class ScanPlot {
         List<ScanPoint> pts = r.points();
         double epsMin = pts.stream().mapToDouble(ScanPoint::eps).min().orElse(Double.NaN);
         double epsMax = pts.stream().mapToDouble(ScanPoint::eps).max().orElse(Double.NaN);
-        String xTitle = "eps = " + r.axis().meaning()
-                + (r.axis().derivedName() != null ? ", " + r.axis().derivedName() + " = eps^-1/2" : "");
+        String xTitle = "\u03b5 = " + r.axis().meaning().replace("rho0", "\u03c10")
+                + (r.axis().derivedName() != null ? ", " + r.axis().derivedName() + " = \u03b5^-1/2" : "");
         if (r.axis().variesEnergy()) {
-            xTitle += "   (" + Format.number(r.axis().energyEv().applyAsDouble(epsMin)) + " to "
-                    + Format.number(r.axis().energyEv().applyAsDouble(epsMax)) + " eV)";
+            xTitle += "   (energy " + Format.energy(r.axis().energyEv().applyAsDouble(epsMin)) + " to "
+                    + Format.energy(r.axis().energyEv().applyAsDouble(epsMax)) + ")";
         }
+        Object statistic = r.settings().getOrDefault("statistic", "worst");
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(m.description())
-                .xAxisTitle(xTitle).yAxisTitle(m.key() + " (worst over gyrophases)").build();
+                .xAxisTitle(xTitle).yAxisTitle(axisTitle(m) + " (" + statistic + " phase)").build();
+        c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setXAxisLogarithmic(true).setYAxisLogarithmic(true)
                 .setLegendPosition(Styler.LegendPosition.OutsideS)
                 .setLegendLayout(Styler.LegendLayout.Vertical);
         double floor = floor(r, m);
         boolean any = false;
         List<Double> pitches = pts.stream().map(ScanPoint::pitchDeg).distinct().toList();
-        for (double pitch : pitches) {
+        for (int pi = 0; pi < pitches.size(); pi++) {
+            double pitch = pitches.get(pi);
+            java.awt.Color colour = PITCH_COLOURS[pi % PITCH_COLOURS.length];
             String at = " @ " + Format.number(pitch) + " deg";
-            any |= curve(c, pts, pitch, m.worstKey(), floor, m.key() + at, SeriesLines.SOLID);
+            any |= curve(c, pts, pitch, m.worstKey(), floor, m.key() + at, SeriesLines.SOLID, colour);
             if (m == ScanMetric.MU_JUMP) {
-                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE.worstKey(), floor, "mu_change" + at, SeriesLines.DOT_DOT);
+                any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE.worstKey(), floor, "mu_change (ripple included)" + at,
+                        SeriesLines.DOT_DOT, colour);
             }
             // discretisation errors of the integrators scanned with --integrators, beside the model error
             String own = m == ScanMetric.MU_JUMP ? "mu_change" : m == ScanMetric.POSITION_ERROR ? m.key() : null;
             if (own != null && r.settings().get("integrators") instanceof List<?> names) {
                 for (Object name : names) {
                     curve(c, pts, pitch, ModelErrorEvaluator.integratorKey(name.toString(), own), floor, name + " " + own + " (discretisation)" + at,
-                            SeriesLines.DASH_DOT);
+                            SeriesLines.DASH_DOT, colour);
                 }
             }
         }
@@ -105,13 +127,28 @@ public final class ScanPlot {
                         new double[] {t.tolerance(), t.tolerance()});
                 s.setMarker(SeriesMarkers.NONE);
                 s.setLineStyle(SeriesLines.DASH_DASH);
+                s.setLineColor(java.awt.Color.GRAY);
             }
-            if (t.outcome() == ThresholdOutcome.CROSSED) {
-                String label = "eps* = " + Format.number(t.epsStar()) + " @ " + Format.number(t.pitchDeg()) + " deg"
-                        + (r.axis().variesEnergy() ? " (" + Format.number(t.energyEvStar()) + " eV)" : "");
+            java.awt.Color colour = PITCH_COLOURS[Math.max(0, pitches.indexOf(t.pitchDeg())) % PITCH_COLOURS.length];
+            if (t.outcome().hasEpsStar()) {
+                String label = "\u03b5* = " + Format.number(t.epsStar()) + " @ " + Format.number(t.pitchDeg()) + " deg"
+                        + (r.axis().variesEnergy() && !Double.isNaN(t.energyEvStar()) ? " (" + Format.energy(t.energyEvStar()) + ")" : "")
+                        + (t.outcome() == ThresholdOutcome.LOST_ABOVE ? ", lost above" : "");
                 if (!c.getSeriesMap().containsKey(label)) {
                     XYSeries s = c.addSeries(label, new double[] {t.epsStar()}, new double[] {t.tolerance()});
                     s.setMarker(SeriesMarkers.DIAMOND);
+                    s.setMarkerColor(colour);
+                    s.setLineStyle(SeriesLines.NONE);
+                }
+            } else if (t.outcome() != ThresholdOutcome.NO_DATA) {
+                // not-reached, exceeded-at-start, lost: said in the legend, with the pitch's colour
+                String label = t.outcome().label() + " @ " + Format.number(t.pitchDeg()) + " deg";
+                if (!c.getSeriesMap().containsKey(label)) {
+                    double x = t.outcome() == ThresholdOutcome.NOT_REACHED ? epsMax : epsMin;
+                    XYSeries s = c.addSeries(label, new double[] {x}, new double[] {t.tolerance()});
+                    s.setMarker(t.outcome() == ThresholdOutcome.NOT_REACHED ? SeriesMarkers.TRIANGLE_UP
+                            : SeriesMarkers.TRIANGLE_DOWN);
+                    s.setMarkerColor(colour);
                     s.setLineStyle(SeriesLines.NONE);
                 }
             }
@@ -137,7 +174,7 @@ public final class ScanPlot {
 
     /** Adds the finite values above {@code floor} under {@code key} at one pitch; false if none. */
     private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, String key, double floor,
-                                 String name, java.awt.BasicStroke line) {
+                                 String name, java.awt.BasicStroke line, java.awt.Color colour) {
         List<Double> xs = new ArrayList<>();
         List<Double> ys = new ArrayList<>();
         for (ScanPoint p : pts) {
@@ -151,8 +188,10 @@ public final class ScanPlot {
             return false;
         }
         XYSeries s = c.addSeries(name, xs, ys);
-        s.setMarker(SeriesMarkers.CIRCLE);
+        s.setMarker(line == SeriesLines.SOLID ? SeriesMarkers.CIRCLE : SeriesMarkers.NONE);
         s.setLineStyle(line);
+        s.setLineColor(colour);
+        s.setMarkerColor(colour);
         return true;
     }
 }
