@@ -18,6 +18,7 @@ import org.knowm.xchart.CategoryChart;
 import org.knowm.xchart.CategoryChartBuilder;
 import org.knowm.xchart.CategorySeries;
 import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.FieldProvider;
 import org.twinorbit.fields.Fields;
@@ -238,33 +239,27 @@ public final class SafeUseMap {
         List<CategoryChart> charts = new ArrayList<>();
         List<String> fields = r.rows().stream().map(Row::field).distinct().toList();
         for (Species s : SPECIES) {
-            CategoryChart c = new CategoryChartBuilder().width(900).height(520)
-                    .title("eps* of the guiding-center model, " + s.name() + "s (energies in safe-use.md)")
-                    .xAxisTitle("field").yAxisTitle("eps* at the default tolerance").build();
-            c.getStyler().setDefaultSeriesRenderStyle(CategorySeries.CategorySeriesRenderStyle.Scatter);
-            c.getStyler().setYAxisLogarithmic(true).setLegendPosition(Styler.LegendPosition.OutsideE);
-            // ε* spans about two decades: label every tick, and tilt the field names apart
-            c.getStyler().setYAxisLogarithmicDecadeOnly(false);
-            c.getStyler().setXAxisLabelRotation(30);
+            // two panels per species: eps* (comparable across fields) and the energy there (the answer)
+            CategoryChart eps = panel("\u03b5* of the guiding-center model, " + s.name() + "s", "\u03b5* at the default tolerance");
+            CategoryChart energy = panel("energy at \u03b5*, " + s.name() + "s (time-scale fields have none)",
+                    "kinetic energy at \u03b5* (eV)");
             boolean any = false;
             for (ScanMetric m : ScanMetric.values()) {
-                List<Double> ys = new ArrayList<>();
-                boolean some = false;
-                for (String f : fields) {
-                    Double y = r.rows().stream().filter(row -> row.field().equals(f)
-                                    && row.species().equals(s.name()) && row.threshold().metric() == m
-                                    && row.threshold().outcome() == ThresholdOutcome.CROSSED)
-                            .map(row -> row.threshold().epsStar()).findFirst().orElse(null);
-                    ys.add(y);
-                    some |= y != null;
-                }
-                if (some) {
-                    c.addSeries(m.key(), fields, ys);
-                    any = true;
-                }
+                any |= addSeries(eps, r, fields, s, m.key(), row -> row.threshold().metric() == m
+                        && row.threshold().outcome().hasEpsStar(), row -> row.threshold().epsStar(), null);
+                addSeries(energy, r, fields, s, m.key(), row -> row.threshold().metric() == m
+                        && row.threshold().outcome().hasEpsStar(), row -> row.threshold().energyEvStar(), null);
             }
+            // outcomes without an eps*: at the edge of the range scanned, in grey, so they are seen
+            addSeries(eps, r, fields, s, "not reached",
+                    row -> row.threshold().outcome() == ThresholdOutcome.NOT_REACHED, Row::epsMax, SeriesMarkers.TRIANGLE_UP);
+            addSeries(eps, r, fields, s, "exceeded at start",
+                    row -> row.threshold().outcome() == ThresholdOutcome.EXCEEDED_AT_START
+                            || row.threshold().outcome() == ThresholdOutcome.EXCEEDED_ONCE_MEASURED,
+                    Row::epsMin, SeriesMarkers.TRIANGLE_DOWN);
             if (any) {
-                charts.add(c);
+                charts.add(eps);
+                charts.add(energy);
             }
         }
         if (charts.isEmpty()) {
@@ -272,11 +267,50 @@ public final class SafeUseMap {
         }
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         try {
-            BitmapEncoder.saveBitmap(charts, charts.size(), 1, bytes, BitmapEncoder.BitmapFormat.PNG);
+            BitmapEncoder.saveBitmap(charts, charts.size() / 2, 2, bytes, BitmapEncoder.BitmapFormat.PNG);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
         AtomicFiles.write(file, bytes.toByteArray());
+    }
+
+    private static CategoryChart panel(String title, String yTitle) {
+        CategoryChart c = new CategoryChartBuilder().width(1000).height(560).title(title).xAxisTitle("field")
+                .yAxisTitle(yTitle).build();
+        c.getStyler().setDefaultSeriesRenderStyle(CategorySeries.CategorySeriesRenderStyle.Scatter);
+        c.getStyler().setYAxisLogarithmic(true).setLegendPosition(Styler.LegendPosition.OutsideS)
+                .setLegendLayout(Styler.LegendLayout.Horizontal);
+        c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
+        c.getStyler().setXAxisLabelRotation(30);
+        c.getStyler().setMarkerSize(9);
+        return c;
+    }
+
+    /**
+     * One series: per field, the value of the first row of species s that {@code which} selects
+     * (null where none); a grey series with the given marker when {@code marker} is set. False
+     * when no field has a value.
+     */
+    private static boolean addSeries(CategoryChart c, Result r, List<String> fields, Species s, String name,
+                                     java.util.function.Predicate<Row> which, java.util.function.ToDoubleFunction<Row> value,
+                                     org.knowm.xchart.style.markers.Marker marker) {
+        List<Double> ys = new ArrayList<>();
+        boolean some = false;
+        for (String f : fields) {
+            Double y = r.rows().stream().filter(row -> row.field().equals(f) && row.species().equals(s.name())
+                            && which.test(row)).map(value::applyAsDouble).filter(v -> v > 0 && Double.isFinite(v))
+                    .findFirst().orElse(null);
+            ys.add(y);
+            some |= y != null;
+        }
+        if (some) {
+            CategorySeries series = c.addSeries(name, fields, ys);
+            if (marker != null) {
+                series.setMarker(marker);
+                series.setMarkerColor(new java.awt.Color(0x888888));
+            }
+        }
+        return some;
     }
 
     private static void deleteTree(Path dir) {
