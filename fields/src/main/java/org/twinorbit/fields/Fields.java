@@ -18,6 +18,9 @@ public final class Fields {
 
     private Fields() {}
 
+    /** Grid files read so far, by field name: a scan builds its field once per point. */
+    private static final Map<String, Field> GRIDS = new java.util.concurrent.ConcurrentHashMap<>();
+
     /** Every provider on the class path, built-in ones first. */
     public static List<FieldProvider> all() {
         List<FieldProvider> list = new ArrayList<>();
@@ -48,6 +51,13 @@ public final class Fields {
      *                  out of range are refused with a message listing what is allowed
      */
     public static Field create(String name, Map<String, Double> overrides, Species species) {
+        if (name.startsWith(GridFile.PREFIX)) {
+            if (!overrides.isEmpty()) {
+                throw new FieldParameterException("a grid field '" + name + "' has no parameters; got "
+                        + overrides.keySet());
+            }
+            return GRIDS.computeIfAbsent(name, k -> GridFile.read(java.nio.file.Path.of(k.substring(GridFile.PREFIX.length()))));
+        }
         FieldProvider p = provider(name);
         return p.create(check(p, overrides), species);
     }

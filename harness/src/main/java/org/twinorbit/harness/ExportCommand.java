@@ -33,6 +33,14 @@ public final class ExportCommand implements Callable<Integer> {
     @Option(names = "--suite", paramLabel = "WHICH", description = "Export every case of the suite instead: quick or full.")
     String suite;
 
+    @Option(names = "--grid-box", paramLabel = "X0,X1,Y0,Y1,Z0,Z1", split = ",", description = "Also write the field "
+            + "sampled on a grid over this box (m) as field-grid.h5, in the grid-file layout (see 'twinorbit grid').")
+    List<Double> gridBox;
+
+    @Option(names = "--grid-nodes", paramLabel = "NX,NY,NZ", split = ",", description = "Nodes of that grid per axis "
+            + "(default 33,33,33).")
+    List<Integer> gridNodes = List.of(33, 33, 33);
+
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Directory to write into (one "
             + "subdirectory per case).")
     Path out;
@@ -51,6 +59,10 @@ public final class ExportCommand implements Callable<Integer> {
         } else {
             cases.add(caseOptions.toCase());
         }
+        if (gridBox != null && (gridBox.size() != 6 || gridNodes.size() != 3
+                || gridNodes.stream().anyMatch(n -> n < 4 || n > 1000))) {
+            throw new BadInputException("--grid-box/--grid-nodes: give X0,X1,Y0,Y1,Z0,Z1 (m) and NX,NY,NZ in [4, 1000]");
+        }
         OutputDirectory.prepare(out);
         PrintWriter pw = spec.commandLine().getOut();
         List<String> names = new ArrayList<>();
@@ -58,6 +70,16 @@ public final class ExportCommand implements Callable<Integer> {
             Path dir = out.resolve(c.name());
             OutputDirectory.prepare(dir);
             CaseExport.write(c, dir);
+            if (gridBox != null) {
+                org.twinorbit.fields.Field f = new org.twinorbit.harness.cases.ResolvedCase(c).field();
+                if (!f.isStatic() || f.hasElectricField()) {
+                    throw new BadInputException("--grid-box: a grid file holds a static magnetic field; field '" + c.field()
+                            + "' is not one");
+                }
+                org.twinorbit.fields.GridFile.write(f, new double[] {gridBox.get(0), gridBox.get(2), gridBox.get(4)},
+                        new double[] {gridBox.get(1), gridBox.get(3), gridBox.get(5)},
+                        new int[] {gridNodes.get(0), gridNodes.get(1), gridNodes.get(2)}, dir.resolve("field-grid.h5"));
+            }
             names.add(c.name());
         }
         if (suite != null) {

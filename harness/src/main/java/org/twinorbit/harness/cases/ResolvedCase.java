@@ -33,15 +33,18 @@ public final class ResolvedCase {
     public ResolvedCase(Case c) {
         this.spec = c;
         Species s = c.species();
-        try {
-            Fields.provider(c.field());
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("field: " + e.getMessage(), e);
+        boolean grid = c.field().startsWith(org.twinorbit.fields.GridFile.PREFIX);
+        if (!grid) {
+            try {
+                Fields.provider(c.field());
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("field: " + e.getMessage(), e);
+            }
         }
         try {
             this.field = Fields.create(c.field(), c.fieldParameters(), s);
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("field-param: " + e.getMessage(), e);
+            throw new IllegalArgumentException((grid ? "field: " : "field-param: ") + e.getMessage(), e);
         }
         this.start = c.start() != null ? c.start() : field.defaultStart();
         if (!field.inDomain(start.x(), start.y(), start.z())) {

@@ -1,0 +1,141 @@
+package org.twinorbit.fields;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.jhdf.HdfFile;
+import io.jhdf.WritableHdfFile;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.twinorbit.shared.FieldSample;
+import org.twinorbit.shared.Species;
+
+/**
+ * Gridded fields against the analytic field they sample. Tricubic Hermite interpolation with
+ * central-difference nodal derivatives errs by O(h³) in the value and O(h²) in the first
+ * derivatives (the derivatives' O(h²) error sets both; Lekien &amp; Marsden, Int. J. Numer. Meth.
+ * Eng. 63, 2005, for the interpolant; the difference error is common practice), so halving the
+ * spacing must cut the B error by at least 2^2.6 and the Jacobian error by 2^1.6. The
+ * interpolant of the vacuum toroidal field stays divergence-free to the same order. Files that
+ * are not a grid are refused with the problem named.
+ */
+class GridFieldTest {
+
+    @TempDir
+    Path tmp;
+
+    private static final double[] LO = {0.7, -0.3, -0.3};
+    private static final double[] HI = {1.3, 0.3, 0.3};
+
+    private GridField grid(Field f, int nodes, String name) {
+        Path file = tmp.resolve(name);
+        GridFile.write(f, LO, HI, new int[] {nodes, nodes, nodes}, file);
+        return GridFile.read(file);
+    }
+
+    /** Largest errors of B and of its Jacobian (relative to |B| and |B|/R0) over random interior points. */
+    private static double[] errors(Field exact, Field g) {
+        Random rnd = new Random(7);
+        FieldSample a = new FieldSample();
+        FieldSample b = new FieldSample();
+        double eb = 0, ej = 0, div = 0;
+        for (int n = 0; n < 300; n++) {
+            double x = 0.8 + 0.4 * rnd.nextDouble();
+            double y = -0.2 + 0.4 * rnd.nextDouble();
+            double z = -0.2 + 0.4 * rnd.nextDouble();
+            exact.evaluate(0, x, y, z, a);
+            g.evaluate(0, x, y, z, b);
+            eb = Math.max(eb, Math.hypot(Math.hypot(a.bx - b.bx, a.by - b.by), a.bz - b.bz) / a.bMag());
+            for (int i = 0; i < 9; i++) {
+                ej = Math.max(ej, Math.abs(a.dB[i] - b.dB[i]) / a.bMag());
+            }
+            div = Math.max(div, Math.abs(b.divB()) / a.bMag());
+        }
+        return new double[] {eb, ej, div};
+    }
+
+    @Test
+    void interpolationConvergesAtItsOrder() {
+        Field toroidal = Fields.create("toroidal", Species.PROTON);
+        double[] coarse = errors(toroidal, grid(toroidal, 13, "c.h5"));
+        double[] fine = errors(toroidal, grid(toroidal, 25, "f.h5"));
+        assertTrue(coarse[0] / fine[0] > Math.pow(2, 2.6), "B: " + coarse[0] + " -> " + fine[0]);
+        assertTrue(coarse[1] / fine[1] > Math.pow(2, 1.6), "Jacobian: " + coarse[1] + " -> " + fine[1]);
+        assertTrue(fine[0] < 1e-4, "B error " + fine[0]);
+        assertTrue(fine[2] < 10 * fine[1], "div B " + fine[2] + " against the Jacobian error " + fine[1]);
+    }
+
+    @Test
+    void theGridIsTheDomainAndLIsTheFilesOwn() {
+        Field toroidal = Fields.create("toroidal", Species.PROTON);
+        GridField g = grid(toroidal, 8, "g.h5");
+        assertTrue(g.inDomain(1.0, 0.0, 0.0));
+        assertTrue(!g.inDomain(1.31, 0.0, 0.0) && !g.inDomain(1.0, 0.0, -0.31));
+        assertEquals(toroidal.length(), g.length(), 0.0);
+    }
+
+    private Path bad(String name, java.util.function.Consumer<WritableHdfFile> content) {
+        Path p = tmp.resolve(name);
+        try (WritableHdfFile f = HdfFile.write(p)) {
+            content.accept(f);
+        }
+        return p;
+    }
+
+    private static void refused(Path file, String expected) {
+        FieldParameterException e = assertThrows(FieldParameterException.class, () -> GridFile.read(file));
+        assertTrue(e.getMessage().contains(expected), e.getMessage());
+    }
+
+    @Test
+    void filesThatAreNotGridsAreRefused() throws IOException {
+        double[] axis = {0, 1, 2, 3};
+        double[][][] cube = new double[4][4][4];
+        refused(tmp.resolve("none.h5"), "no such file");
+        Path text = tmp.resolve("text.h5");
+        Files.writeString(text, "x_m,y_m\n");
+        refused(text, "not a readable grid file");
+        refused(bad("missing.h5", f -> {
+            f.putDataset("x_m", axis);
+            f.putDataset("y_m", axis);
+        }), "dataset /z_m is missing");
+        refused(bad("short.h5", f -> {
+            f.putDataset("x_m", new double[] {0, 1, 2});
+            f.putDataset("y_m", axis);
+            f.putDataset("z_m", axis);
+        }), "at least 4");
+        refused(bad("uneven.h5", f -> {
+            f.putDataset("x_m", new double[] {0, 1, 2.5, 3});
+            f.putDataset("y_m", axis);
+            f.putDataset("z_m", axis);
+        }), "is not uniform");
+        refused(bad("shape.h5", f -> {
+            f.putDataset("x_m", axis);
+            f.putDataset("y_m", axis);
+            f.putDataset("z_m", axis);
+            f.putDataset("bx_t", new double[4][4][3]);
+        }), "must be a 4 x 4 x 4 array");
+        double[][][] nan = new double[4][4][4];
+        nan[1][2][3] = Double.NaN;
+        refused(bad("nan.h5", f -> {
+            f.putDataset("x_m", axis);
+            f.putDataset("y_m", axis);
+            f.putDataset("z_m", axis);
+            f.putDataset("bx_t", nan);
+        }), "not finite");
+        refused(bad("length.h5", f -> {
+            f.putDataset("x_m", axis);
+            f.putDataset("y_m", axis);
+            f.putDataset("z_m", axis);
+            f.putDataset("bx_t", cube);
+            f.putDataset("by_t", cube);
+            f.putDataset("bz_t", cube);
+            f.putDataset("length_m", new double[] {-1});
+        }), "/length_m must hold one length > 0 m");
+    }
+}
