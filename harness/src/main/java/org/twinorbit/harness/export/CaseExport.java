@@ -42,6 +42,7 @@ import org.twinorbit.shared.FieldSample;
  *                     same facts for readers without JSON)
  * runs.csv            purpose,level,dt_s,steps,phases,trajectory_file: the runs of the manifest,
  *                     phases space-separated
+ * initial-states.h5   the same in HDF5: /x_m and /u_m_per_s, [phases][3]
  * initial-states.csv  phase, x_m, y_m, z_m, ux_m_per_s, uy_m_per_s, uz_m_per_s: every gyrophase
  *                     at t = 0, u = γv (the state a pusher starts from; a leapfrog scheme offsets
  *                     its own half step)
@@ -78,6 +79,11 @@ public final class CaseExport {
         RunSchedule s = CaseRunner.schedule(c);
         ResolvedCase rc = s.resolved();
         AtomicFiles.write(dir.resolve("initial-states.csv"), initialStates(s));
+        // the same states in HDF5 for codes that read that rather than CSV: /x_m and /u_m_per_s [phases][3]
+        try (io.jhdf.WritableHdfFile h = io.jhdf.HdfFile.write(dir.resolve("initial-states.h5"))) {
+            h.putDataset("x_m", s.x0());
+            h.putDataset("u_m_per_s", s.u0());
+        }
         AtomicFiles.write(dir.resolve("case.csv"), caseTable(rc));
         AtomicFiles.write(dir.resolve("runs.csv"), runTable(s));
         AtomicFiles.write(dir.resolve("gc-start.csv"), guidingCenterStart(s));

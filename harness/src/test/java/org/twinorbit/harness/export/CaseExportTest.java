@@ -60,6 +60,16 @@ class CaseExportTest {
             assertEquals(rho * Math.sin(Math.toRadians(60)), Math.hypot(v[1], v[2]), 1e-12 * rho, row);
             assertEquals(0.0, v[3], 0.0, row);
         }
+        // the HDF5 copy holds the very same doubles
+        try (io.jhdf.HdfFile h = new io.jhdf.HdfFile(dir.resolve("initial-states.h5"))) {
+            double[][] x = (double[][]) h.getDatasetByPath("/x_m").getData();
+            double[][] u = (double[][]) h.getDatasetByPath("/u_m_per_s").getData();
+            for (int k = 0; k < 6; k++) {
+                double[] v = java.util.Arrays.stream(rows.get(k + 1).split(",")).mapToDouble(Double::parseDouble).toArray();
+                assertEquals(v[1], x[k][0], 0.0);
+                assertEquals(v[6], u[k][2], 0.0);
+            }
+        }
     }
 
     @Test
