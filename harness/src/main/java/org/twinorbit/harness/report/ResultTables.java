@@ -22,7 +22,7 @@ public final class ResultTables {
     private ResultTables() {}
 
     /** Columns of the compact table. */
-    static final List<String> HEADER = List.of("integrator", "error kind", "status", "mu change", "mu jump",
+    public static final List<String> HEADER = List.of("integrator", "error kind", "status", "mu change", "mu jump",
             "energy err", "invariant err", "phase err", "drift err", "pos err/rho", "bounce err", "class",
             "order", "steps", "field evals");
 
