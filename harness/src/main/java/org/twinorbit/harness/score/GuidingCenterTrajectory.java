@@ -1,7 +1,5 @@
 package org.twinorbit.harness.score;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -25,18 +23,8 @@ public record GuidingCenterTrajectory(double[] t, double[][] x, double[] pPar) {
 
     /** @param dt the run's step (s) @param steps its step count */
     public static GuidingCenterTrajectory read(Path file, double dt, long steps) {
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file);
-        } catch (IOException e) {
-            throw new BadInputException("trajectory: cannot read " + file + " (" + e.getMessage() + ")");
-        }
+        List<String> lines = TrajectoryFile.lines(file, CaseExport.GC_TRAJECTORY_COLUMNS);
         String where = "trajectory " + file.getFileName();
-        String header = String.join(",", CaseExport.GC_TRAJECTORY_COLUMNS);
-        if (lines.isEmpty() || !lines.get(0).trim().replace(" ", "").equals(header)) {
-            throw new BadInputException(where + ": the first line must be the header " + header
-                    + (lines.isEmpty() ? " (the file is empty)" : ", got '" + lines.get(0).trim() + "'"));
-        }
         List<double[]> rows = new ArrayList<>();
         for (int i = 1; i < lines.size(); i++) {
             String line = lines.get(i).trim();

@@ -39,18 +39,8 @@ public final class TrajectoryFile {
      * @return the samples by phase
      */
     public static Map<Integer, Series> read(Path file, List<Integer> phases, double dt, long steps) {
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file);
-        } catch (IOException e) {
-            throw new BadInputException("trajectory: cannot read " + file + " (" + e.getMessage() + ")");
-        }
+        List<String> lines = lines(file, CaseExport.TRAJECTORY_COLUMNS);
         String where = "trajectory " + file.getFileName();
-        String header = String.join(",", CaseExport.TRAJECTORY_COLUMNS);
-        if (lines.isEmpty() || !lines.get(0).trim().replace(" ", "").equals(header)) {
-            throw new BadInputException(where + ": the first line must be the header " + header
-                    + (lines.isEmpty() ? " (the file is empty)" : ", got '" + lines.get(0).trim() + "'"));
-        }
         Map<Integer, List<double[]>> rows = new LinkedHashMap<>();
         for (int i = 1; i < lines.size(); i++) {
             String line = lines.get(i).trim();
@@ -118,5 +108,24 @@ public final class TrajectoryFile {
             out.put(phase, new Series(t, x, u));
         }
         return out;
+    }
+
+    /**
+     * The lines of a trajectory file whose first line is the header of {@code columns}, shared by
+     * the full-orbit and guiding-center readers.
+     */
+    static List<String> lines(Path file, List<String> columns) {
+        List<String> lines;
+        try {
+            lines = Files.readAllLines(file);
+        } catch (IOException e) {
+            throw new BadInputException("trajectory: cannot read " + file + " (" + e.getMessage() + ")");
+        }
+        String header = String.join(",", columns);
+        if (lines.isEmpty() || !lines.get(0).trim().replace(" ", "").equals(header)) {
+            throw new BadInputException("trajectory " + file.getFileName() + ": the first line must be the header "
+                    + header + (lines.isEmpty() ? " (the file is empty)" : ", got '" + lines.get(0).trim() + "'"));
+        }
+        return lines;
     }
 }
