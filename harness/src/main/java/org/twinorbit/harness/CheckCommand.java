@@ -52,8 +52,9 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Option(names = "--tolerance", paramLabel = "[CASE:]METRIC=REL[,ABS]",
             description = "Tolerance of a metric, for every case or for one (repeatable): relative, and optionally "
-                    + "the absolute floor (default: the metric's). Metrics: mu_change, mu_jump, energy_error, "
-                    + "phase_error, drift_error, position_error_rho, bounce_period_s, bounce_period_error, "
+                    + "the absolute floor (default: the metric's). Metrics: mu_change, reference_mu_change, mu_jump, "
+                    + "energy_error, phase_error, drift_error, position_error_rho, particle_position_error_rho, "
+                    + "bounce_period_s, bounce_period_error, "
                     + "mirror_field_t, mirror_field_error, invariant_error, order, class_agreement, and for scans "
                     + "class_change, eps_star, energy_ev_star, ... (an unknown name lists them all).")
     Map<String, String> tolerance = new LinkedHashMap<>();

@@ -73,6 +73,8 @@ public final class RunCommand implements Callable<Integer> {
             pw.println();
             pw.print(ResultTables.tableWithWallTime(r).aligned());
             pw.println();
+            pw.print(RunReport.legend());
+            pw.println();
             for (String line : VerdictReport.lines(verdicts)) {
                 pw.println(line);
             }

@@ -20,11 +20,25 @@ import java.util.Locale;
  */
 public enum Metric {
     MU_CHANGE("mu_change", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),
+    /**
+     * The exact orbit's own μ change beside a pusher's: physics, not an error, so no better side.
+     * Floor as for mu_change, 1e-12: the smallest value of the quick suite, ~3e-10 in the uniform
+     * and crossed fields where μ is exact, is the reference's own tolerance (rtol 1e-10) and lies
+     * two orders above it; every field with a gradient has a ripple of 1e-8 or more.
+     */
+    REFERENCE_MU_CHANGE("reference_mu_change", 1e-9, 1e-12, Direction.NONE, false),
     MU_JUMP("mu_jump", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),
     ENERGY_ERROR("energy_error", 1e-9, 1e-13, Direction.SMALLER_IS_BETTER, false),
     PHASE_ERROR("phase_error", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),
     DRIFT_ERROR("drift_error", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),
     POSITION_ERROR("position_error_rho", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),
+    /**
+     * The particle's own end-position error (ρ0). Floor 1e-10: a position's last bit is |x|·1e-16,
+     * at most ~1e-11 ρ0 for the suite's starts (|x|/ρ0 below 1e5, the dipole's 5 Earth radii over
+     * a proton gyroradius of ~1e3 m), while a pusher's gyrophase error alone puts the particle
+     * 1e-6 ρ0 or more off within one gyration at the steps the suite uses.
+     */
+    PARTICLE_POSITION_ERROR("particle_position_error_rho", 1e-9, 1e-10, Direction.SMALLER_IS_BETTER, false),
     /** Seconds: the period itself has no round-off floor, only a relative tolerance. */
     BOUNCE_PERIOD("bounce_period_s", 1e-9, 0, Direction.NONE, false),
     BOUNCE_PERIOD_ERROR("bounce_period_error", 1e-9, 1e-12, Direction.SMALLER_IS_BETTER, false),

@@ -179,6 +179,36 @@ public final class OrbitMetrics {
         return Math.copySign(Math.sqrt(d2) / rho0 / Math.max(1, periods), along);
     }
 
+    /**
+     * Signed particle position error, in ρ0: |x − x_ref| / ρ0 of the particle itself (not of its
+     * gyration center) at the end, where both runs stopped at the same time; the sign says
+     * whether x is ahead (+) or behind (−) along the reference particle's velocity there, so a
+     * gyrophase lag shows as a negative error. NaN when the runs ended at different times (one
+     * was lost or failed) or a state is not finite.
+     *
+     * @param x    particle position (m) at time t
+     * @param t    its time (s)
+     * @param xRef reference particle position (m) at time tRef
+     * @param uRef reference particle u = γv (m/s) at time tRef
+     * @param tRef its time (s)
+     * @param rho0 gyroradius (m)
+     */
+    public static double particlePositionError(double[] x, double t, double[] xRef, double[] uRef, double tRef,
+                                               double rho0) {
+        if (!(Math.abs(t - tRef) <= 1e-9 * Math.abs(tRef)) || !(tRef > 0)) {
+            return Double.NaN;
+        }
+        double d2 = 0;
+        double along = 0;
+        for (int i = 0; i < 3; i++) {
+            double d = x[i] - xRef[i];
+            d2 += d * d;
+            along += d * uRef[i];
+        }
+        double e = Math.sqrt(d2) / rho0;
+        return Double.isFinite(e) ? Math.copySign(e, along) : Double.NaN;
+    }
+
     /** Bounce period (s): mean spacing of mirror points of the same direction; NaN with fewer than two. */
     public static double bouncePeriod(Track t) {
         double[] ev = t.upwardMirrorTimes();

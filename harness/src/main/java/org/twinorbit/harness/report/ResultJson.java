@@ -45,11 +45,18 @@ import org.twinorbit.harness.verdict.Verdicts;
  *             status_time_s (when that status was reached, earliest phase; null when ok),
  *             orbit_class (trapped | passing | lost, '/'-joined when phases differ),
  *             class_agreement (fraction of phases classed like the reference),
- *             mu_change, mu_jump, energy_error, phase_error, drift_error, position_error_rho,
- *             bounce_period_s, bounce_period_error, mirror_field_t, mirror_field_error —
+ *             mu_change, reference_mu_change, mu_jump, energy_error, phase_error, drift_error,
+ *             position_error_rho, particle_position_error_rho, bounce_period_s, bounce_period_error,
+ *             mirror_field_t, mirror_field_error —
  *             each {mean, rms, worst} over the gyrophase ensemble of the signed per-phase values
- *             (worst = largest magnitude, sign kept; drift_error is along the reference drift,
- *             position_error_rho per bounce period and signed ahead/behind),
+ *             (worst = largest magnitude, sign kept; phase_error is φ/φ_ref − 1, the gyrophase
+ *             turned over the gyrophase the reference turned in the same time; drift_error is
+ *             along the reference drift; position_error_rho is the gyro-averaged center's (the
+ *             guiding center's) error in ρ0 per bounce period, signed ahead/behind along the
+ *             reference motion; particle_position_error_rho (full-orbit rows) is the particle's
+ *             own |x − x_ref|/ρ0 at the end time, signed along the reference particle's velocity;
+ *             reference_mu_change (full-orbit rows) is the full-orbit reference's own mu_change
+ *             for the same phases, the physical ripple beside the row's),
  *             mu_jump_from (the points mu_jump compared: sheet-exit | mirror-points |
  *             first-last-gyration, '/'-joined when phases differ; null for a guiding-center row),
  *             invariant_error {invariant: {mean, rms, worst}} (full-orbit rows; the invariant's name

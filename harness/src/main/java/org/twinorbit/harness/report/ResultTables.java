@@ -22,9 +22,9 @@ public final class ResultTables {
     private ResultTables() {}
 
     /** Columns of the compact table. */
-    public static final List<String> HEADER = List.of("integrator", "error kind", "status", "mu change", "mu jump",
-            "energy err", "invariant err", "phase err", "drift err", "pos err/rho", "bounce err", "class",
-            "order", "steps", "field evals");
+    public static final List<String> HEADER = List.of("integrator", "error kind", "status", "mu change",
+            "ref mu change", "mu jump", "energy err", "invariant err", "phase err", "drift err", "center pos err/rho",
+            "particle pos err/rho", "bounce err", "class", "order", "steps", "field evals");
 
     /** The compact table of one case (worst over the ensemble). @param kind discretisation, model or null for all */
     public static TextTable table(CaseResult r, String kind) {
@@ -49,9 +49,10 @@ public final class ResultTables {
             String status = row.status().equals("ok") ? "ok"
                     : row.status() + " at " + Format.number(row.statusTime() / r.resolved().gyroPeriod()) + " Tc";
             List<String> cells = new ArrayList<>(List.of(row.integrator(), row.errorKind(), status,
-                    w(row, "mu_change"), w(row, "mu_jump"),
+                    w(row, "mu_change"), w(row, "reference_mu_change"), w(row, "mu_jump"),
                     w(row, "energy_error"), Format.number(worstInvariant(row)), w(row, "phase_error"),
-                    w(row, "drift_error"), w(row, "position_error_rho"), w(row, "bounce_period_error"),
+                    w(row, "drift_error"), w(row, "position_error_rho"), w(row, "particle_position_error_rho"),
+                    w(row, "bounce_period_error"),
                     row.orbitClass() + (row.classAgreement() < 1 ? " (" + pct(row.classAgreement()) + " agree)" : ""),
                     Double.isNaN(row.order()) ? "—" : String.format(Locale.ROOT, "%.2f", row.order()),
                     Format.number(Math.rint(row.steps())), Format.number(Math.rint(row.fieldEvaluations()))));

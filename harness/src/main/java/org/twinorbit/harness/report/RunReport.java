@@ -28,11 +28,11 @@ public final class RunReport {
             sb.append("- ").append(line).append('\n');
         }
         sb.append('\n');
-        sb.append(Legend.TEXT).append('\n');
         sb.append("## Discretisation error (each integrator against the reference of its own model)\n\n");
         sb.append(ResultTables.table(r, "discretisation").markdown()).append('\n');
         sb.append("## Model error (guiding-center reference against the gyro-averaged full-orbit reference)\n\n");
         sb.append(ResultTables.table(r, "model").markdown()).append('\n');
+        sb.append("### What the columns mean\n\n").append(Legend.TEXT).append('\n');
         sb.append("## Plots\n\n");
         for (String p : new String[] {"mu", "energy", "orbit", "convergence"}) {
             sb.append("![").append(p).append("](").append(plotPrefix).append(p).append(".png)\n");

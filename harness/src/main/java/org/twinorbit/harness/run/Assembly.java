@@ -92,6 +92,10 @@ final class Assembly {
                 double[] w = OrbitMetrics.window(refTr);
                 m.get("drift_error")[k] = drift(f, tr, refTr, w, rho);
                 m.get("position_error_rho")[k] = OrbitMetrics.positionError(tr, refTr, rho);
+                m.get("particle_position_error_rho")[k] = OrbitMetrics.particlePositionError(r.finalX(),
+                        r.finalTime(), ref.finalX(), ref.finalU(), ref.finalTime(), rho);
+                // the exact orbit's own μ change beside the pusher's: the physical ripple
+                m.get("reference_mu_change")[k] = OrbitMetrics.muChange(ref.gyro());
                 bounce(m, k, f, tr, refTr);
                 for (int j = 0; j < invNames.size(); j++) {
                     inv.get(invNames.get(j))[k] = r.invariants().maxError(j);
@@ -221,9 +225,18 @@ final class Assembly {
             energy.add(new CaseResult.Curve(p.gcs.get(g).name(), r.recorder().energySeries().times(),
                     r.recorder().energySeries().values()));
         }
+        List<CaseResult.Orbit> orbits = new ArrayList<>();
+        for (int i = 0; i < p.pushers.size(); i++) {
+            orbits.add(new CaseResult.Orbit(p.pushers.get(i).name(), "full-orbit", p.fo[i][0].gyro().centers()));
+        }
+        for (int g = 0; g < p.gcs.size(); g++) {
+            orbits.add(new CaseResult.Orbit(p.gcs.get(g).name(), "guiding-center", p.gc[g].recorder().track()));
+        }
+        CaseResult.Sweeps sweeps = new CaseResult.Sweeps(p.convRef == null ? Double.NaN : p.convN * p.dt, convSelf,
+                p.tEnd, gcSelf);
         return new CaseResult(p.rc, p.tEnd, p.bounce, p.n, p.gcDt, rows, refs, mu, energy,
                 p.foRef[0].gyro().centers(),
-                (p.gcMatched[0] != null ? p.gcMatched[0] : p.gcRef).recorder().track());
+                (p.gcMatched[0] != null ? p.gcMatched[0] : p.gcRef).recorder().track(), orbits, sweeps);
     }
 
     /**

@@ -12,7 +12,8 @@ import org.twinorbit.harness.metrics.InvariantMonitor;
  * @param energy      energy error
  * @param invariants  drifts of the exact invariants
  * @param finalX      particle position (m) at the last sample
+ * @param finalU      particle u = γv (m/s) at the last sample
  * @param finalTime   time (s) of the last sample
  */
 public record FullOrbitRecord(Outcome outcome, GyroAverager gyro, EnergyMonitor energy,
-                              InvariantMonitor invariants, double[] finalX, double finalTime) {}
+                              InvariantMonitor invariants, double[] finalX, double[] finalU, double finalTime) {}

@@ -27,6 +27,7 @@ public final class Orbits {
         final EnergyMonitor energy;
         final InvariantMonitor invariants;
         final double[] lastX = new double[3];
+        final double[] lastU = new double[3];
         double lastT = Double.NaN;
 
         FullOrbitWatch(Field field, Species s, int stride, double deadband) {
@@ -41,11 +42,12 @@ public final class Orbits {
             energy.observe(t, x, u);
             invariants.observe(t, x, u);
             System.arraycopy(x, 0, lastX, 0, 3);
+            System.arraycopy(u, 0, lastU, 0, 3);
             lastT = t;
         }
 
         FullOrbitRecord record(Outcome o) {
-            return new FullOrbitRecord(o, gyro, energy, invariants, lastX.clone(), lastT);
+            return new FullOrbitRecord(o, gyro, energy, invariants, lastX.clone(), lastU.clone(), lastT);
         }
     }
 

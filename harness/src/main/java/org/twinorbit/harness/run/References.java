@@ -44,7 +44,8 @@ public final class References {
         FullOrbitReference.Result r = new FullOrbitReference(field, s, rtol)
                 .run(0.0, x0.clone(), u0.clone(), tEnd, tEnd / n, watch);
         Outcome o = new Outcome(r.status(), r.endTime(), -1, r.evaluations(), System.nanoTime() - t0);
-        return new FullOrbitRecord(o, watch.gyro, watch.energy, watch.invariants, r.position().toArray(), r.endTime());
+        return new FullOrbitRecord(o, watch.gyro, watch.energy, watch.invariants, r.position().toArray(),
+                r.velocity().toArray(), r.endTime());
     }
 
     /**

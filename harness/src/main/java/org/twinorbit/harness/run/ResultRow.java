@@ -14,7 +14,11 @@ import java.util.Map;
  *                         models phase by phase ({@code lost-full-orbit}, {@code lost-guiding-center},
  *                         {@code unstable-full-orbit}; plain {@code lost} only when both lost it)
  * @param statusTime       earliest time (s) a phase stopped with that status; NaN when ok
- * @param metrics          metric name -> mean and worst over the ensemble, in report order
+ * @param metrics          metric name -> mean, rms and worst over the ensemble, in report order
+ *                         ({@code position_error_rho}: of the gyro-averaged center;
+ *                         {@code particle_position_error_rho}: of the particle itself, full-orbit rows;
+ *                         {@code reference_mu_change}: the full-orbit reference's own μ change,
+ *                         full-orbit rows)
  * @param invariants       exact invariant name -> its drift (full-orbit rows)
  * @param orbitClass       trapped / passing / lost, or several joined with '/' when phases differ
  * @param classAgreement   fraction of phases whose class equals the reference's
@@ -36,9 +40,10 @@ public record ResultRow(String integrator, String model, String errorKind, Strin
                         Diagnostics diagnostics) {
 
     /** Metric names in report order (the JSON and CSV field names). */
-    public static final java.util.List<String> METRICS = java.util.List.of("mu_change", "mu_jump", "energy_error",
-            "phase_error", "drift_error", "position_error_rho", "bounce_period_s", "bounce_period_error",
-            "mirror_field_t", "mirror_field_error");
+    public static final java.util.List<String> METRICS = java.util.List.of("mu_change", "reference_mu_change",
+            "mu_jump", "energy_error", "phase_error", "drift_error", "position_error_rho",
+            "particle_position_error_rho", "bounce_period_s", "bounce_period_error", "mirror_field_t",
+            "mirror_field_error");
 
     /** A metric by name, {@link Stat#NONE} when the row has none. */
     public Stat metric(String name) {
