@@ -235,6 +235,21 @@ public final class SafeUseMap {
 
     /** One panel per species: ε* by field, one series per metric; outcomes without ε* are not drawn. */
     static void plot(Result r, Path file) {
+        List<CategoryChart> charts = charts(r);
+        if (charts.isEmpty()) {
+            return;
+        }
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            BitmapEncoder.saveBitmap(charts, charts.size() / 2, 2, bytes, BitmapEncoder.BitmapFormat.PNG);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        AtomicFiles.write(file, bytes.toByteArray());
+    }
+
+    /** The panels of the figure: per species with a threshold, ε* and the energy there. */
+    static List<CategoryChart> charts(Result r) {
         System.setProperty("java.awt.headless", "true");
         List<CategoryChart> charts = new ArrayList<>();
         List<String> fields = r.rows().stream().map(Row::field).distinct().toList();
@@ -262,16 +277,7 @@ public final class SafeUseMap {
                 charts.add(energy);
             }
         }
-        if (charts.isEmpty()) {
-            return;
-        }
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        try {
-            BitmapEncoder.saveBitmap(charts, charts.size() / 2, 2, bytes, BitmapEncoder.BitmapFormat.PNG);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        AtomicFiles.write(file, bytes.toByteArray());
+        return charts;
     }
 
     private static CategoryChart panel(String title, String yTitle) {

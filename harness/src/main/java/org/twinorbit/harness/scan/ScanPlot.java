@@ -49,16 +49,7 @@ public final class ScanPlot {
 
     /** Writes the plot atomically to {@code file}; writes nothing when no metric has a positive value. */
     public static void write(ScanResult r, Path file) {
-        System.setProperty("java.awt.headless", "true");
-        List<XYChart> charts = new ArrayList<>();
-        for (ScanMetric m : ScanMetric.values()) {
-            if (m.thresholded() && m != ScanMetric.CLASS_CHANGE) {
-                XYChart c = chart(r, m);
-                if (c != null) {
-                    charts.add(c);
-                }
-            }
-        }
+        List<XYChart> charts = charts(r);
         if (charts.isEmpty()) {
             return; // nothing was measured that a log-log panel could show
         }
@@ -73,6 +64,21 @@ public final class ScanPlot {
             throw new UncheckedIOException(e);
         }
         AtomicFiles.write(file, bytes.toByteArray());
+    }
+
+    /** The panels of the plot, one per thresholded metric with something measured. */
+    static List<XYChart> charts(ScanResult r) {
+        System.setProperty("java.awt.headless", "true");
+        List<XYChart> charts = new ArrayList<>();
+        for (ScanMetric m : ScanMetric.values()) {
+            if (m.thresholded() && m != ScanMetric.CLASS_CHANGE) {
+                XYChart c = chart(r, m);
+                if (c != null) {
+                    charts.add(c);
+                }
+            }
+        }
+        return charts;
     }
 
     /** The panel of one metric, or null when nothing of it was measured. */

@@ -1,0 +1,45 @@
+package org.twinorbit.harness.scan;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.knowm.xchart.XYChart;
+import org.twinorbit.harness.report.PictureChecks;
+import org.twinorbit.harness.run.PhaseStatistic;
+
+/** The scan plot and the safe-use figure render at their size, are not blank and have their series. */
+class ScanPicturesTest {
+
+    @Test
+    void scanPanelsHaveTheirCurvesAndTolerances(@TempDir Path dir) {
+        ScanResult r = ScanTestSupport.run(dir, "--field", "mirror", "--phases", "2", "--pitch", "60",
+                "--eps-min", "0.02", "--eps-max", "0.2", "--points", "3");
+        List<XYChart> panels = ScanPlot.charts(r);
+        org.junit.jupiter.api.Assertions.assertFalse(panels.isEmpty());
+        for (XYChart c : panels) {
+            String metric = c.getSeriesMap().keySet().iterator().next();
+            PictureChecks.check(c, 640, 600, List.of(metric));
+            org.junit.jupiter.api.Assertions.assertTrue(metric.endsWith(" @ 60 deg"), metric);
+            org.junit.jupiter.api.Assertions.assertTrue(c.getSeriesMap().keySet().stream()
+                    .anyMatch(k -> k.startsWith("tolerance ")), c.getTitle());
+        }
+        PictureChecks.check(panels.get(0), 640, 600, List.of("mu_jump @ 60 deg", "mu_change (ripple included) @ 60 deg"));
+    }
+
+    @Test
+    void safeUsePanelsShowEpsStarAndTheOpenOutcomes() {
+        Threshold crossed = new Threshold(ScanMetric.MU_JUMP, 0.01, PhaseStatistic.WORST, 60, ThresholdOutcome.CROSSED,
+                0.09, 1.2e5);
+        Threshold open = new Threshold(ScanMetric.DRIFT_ERROR, 0.05, PhaseStatistic.WORST, 60,
+                ThresholdOutcome.NOT_REACHED, Double.NaN, Double.NaN);
+        SafeUseMap.Result r = new SafeUseMap.Result(List.of(
+                new SafeUseMap.Row("mirror", "proton", "rho0/L", 60, 3e-3, 0.3, crossed),
+                new SafeUseMap.Row("mirror", "proton", "rho0/L", 60, 3e-3, 0.3, open)), Map.of());
+        var panels = SafeUseMap.charts(r);
+        org.junit.jupiter.api.Assertions.assertEquals(2, panels.size(), "eps* and energy for protons");
+        PictureChecks.check(panels.get(0), 1000, 560, List.of("mu_jump", "not reached"));
+        PictureChecks.check(panels.get(1), 1000, 560, List.of("mu_jump"));
+    }
+}
