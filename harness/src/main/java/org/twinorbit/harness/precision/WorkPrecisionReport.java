@@ -28,7 +28,7 @@ import org.twinorbit.harness.report.ToolInfo;
 public final class WorkPrecisionReport {
 
     static final List<String> HEADER = List.of("pusher", "steps/Tc", "steps", "field evals", "phase err",
-            "pos err/rho", "energy err", "mu change");
+            "center pos err/rho", "energy err", "mu change");
 
     private WorkPrecisionReport() {}
 
@@ -54,7 +54,8 @@ public final class WorkPrecisionReport {
     public static void write(WorkPrecision.Result r, Path dir) {
         StringBuilder md = new StringBuilder("# Work and precision, " + r.caseName() + "\n\n");
         md.append("Every pusher at every step: errors (worst gyrophase, magnitude) against cost per orbit. ")
-                .append("pos err/rho is the guiding-center position error per bounce period in rho0; the full-orbit ")
+                .append("center pos err/rho is the position error of the gyro-averaged center (the guiding center) ")
+                .append("per bounce period in rho0; the full-orbit ")
                 .append("reference's own error is ").append(Format.number(r.referenceError()))
                 .append(" rho0, the floor of what can be measured. Wall times are printed by the command, not kept ")
                 .append("here.\n\n").append(table(r, false).markdown()).append("\n![work and precision](precision.png)\n");
@@ -88,13 +89,14 @@ public final class WorkPrecisionReport {
 
     static XYChart plot(WorkPrecision.Result r) {
         XYChart c = Plots.chart("work and precision, " + r.caseName(), "field evaluations per orbit",
-                "position error per bounce / rho0 (worst phase)");
+                "guiding-center position error per bounce / \u03c10 (worst phase)");
         c.getStyler().setXAxisLogarithmic(true);
         c.getStyler().setYAxisLogarithmic(true);
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideE);
         Set<String> names = new LinkedHashSet<>();
         r.points().forEach(p -> names.add(p.pusher()));
         double xmin = Double.POSITIVE_INFINITY, xmax = 0, anchorX = 0, anchorY = 0;
+        int index = 0;
         for (String name : names) {
             List<double[]> xy = new ArrayList<>();
             for (WorkPrecision.Point p : r.points()) {
@@ -107,8 +109,7 @@ public final class WorkPrecisionReport {
             }
             double[] x = xy.stream().mapToDouble(v -> v[0]).toArray();
             double[] y = xy.stream().mapToDouble(v -> v[1]).toArray();
-            XYSeries s = c.addSeries(name, x, y);
-            s.setMarker(SeriesMarkers.CIRCLE);
+            Plots.sweep(c, index++, names.size(), name, x, y);
             for (double v : x) {
                 xmin = Math.min(xmin, v);
                 xmax = Math.max(xmax, v);

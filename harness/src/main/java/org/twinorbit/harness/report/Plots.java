@@ -75,7 +75,7 @@ public final class Plots {
     /** Legend name of the reference's μ curve. */
     static final String MU_REFERENCE = "full-orbit reference (physical ripple)";
     /** Legend name of the reference's energy curve. */
-    static final String ENERGY_REFERENCE = "full-orbit reference";
+    static final String ENERGY_REFERENCE = "full-orbit reference (its own error)";
 
     static XYChart mu(CaseResult r) {
         XYChart c = chart("gyro-averaged \u03bc: |\u27e8\u03bc\u27e9k / \u27e8\u03bc\u27e90 \u2212 1| along the orbit, "
@@ -194,9 +194,8 @@ public final class Plots {
             ResultRow row = shown.get(i);
             String order = Double.isNaN(row.order()) ? "order not measurable"
                     : String.format(Locale.ROOT, "order %.2f", row.order());
-            XYSeries s = styled(c, i, shown.size(), row.integrator() + " (" + order + ")",
-                    scale(row.convergenceDt(), 1 / tc), row.convergenceError(), false);
-            s.setMarker(MARKERS[i % MARKERS.length]);
+            sweep(c, i, shown.size(), row.integrator() + " (" + order + ")", scale(row.convergenceDt(), 1 / tc),
+                    row.convergenceError());
         }
         if (shown.isEmpty()) {
             c.addSeries("no integrator converged measurably", new double[] {1}, new double[] {1});
@@ -211,6 +210,33 @@ public final class Plots {
         }
         logRange(c, true);
         return c;
+    }
+
+    /**
+     * Series i of n of a sweep (a few points, each marked): in its own colour, dash, width and
+     * marker, so that integrators whose points coincide stay distinguishable.
+     */
+    public static XYSeries sweep(XYChart c, int i, int n, String name, double[] x, double[] y) {
+        XYSeries s = styled(c, i, n, name, x, y, false);
+        // earlier series get larger markers: coinciding points show as nested shapes
+        s.setMarker(new Scaled(MARKERS[i % MARKERS.length], 1 + 0.9 * (n - 1 - i) / Math.max(1, n - 1)));
+        return s;
+    }
+
+    /** A marker drawn at a multiple of the chart's marker size (XChart has one size per chart). */
+    static final class Scaled extends org.knowm.xchart.style.markers.Marker {
+        final org.knowm.xchart.style.markers.Marker shape;
+        private final double factor;
+
+        Scaled(org.knowm.xchart.style.markers.Marker shape, double factor) {
+            this.shape = shape;
+            this.factor = factor;
+        }
+
+        @Override
+        public void paint(java.awt.Graphics2D g, double x, double y, int size) {
+            shape.paint(g, x, y, (int) Math.round(size * factor));
+        }
     }
 
     /** Legend name of a model's reference-error line on the convergence plot. */

@@ -85,6 +85,12 @@ class PlotsPictureTest {
             double slope = Math.log(g.getYData()[1] / g.getYData()[0]) / Math.log(g.getXData()[1] / g.getXData()[0]);
             assertEquals(order, slope, 1e-9, "guide of order " + order);
         }
+        // Boris and Vay have the same convergence points: nested marker shapes of different size
+        XYSeries boris = c.getSeriesMap().values().stream().filter(x -> x.getName().startsWith("boris (")).findFirst()
+                .orElseThrow();
+        XYSeries vay = c.getSeriesMap().values().stream().filter(x -> x.getName().startsWith("vay (")).findFirst()
+                .orElseThrow();
+        assertNotEquals(((Plots.Scaled) boris.getMarker()).shape.getClass(), ((Plots.Scaled) vay.getMarker()).shape.getClass());
         XYSeries floor = c.getSeriesMap().get(Plots.floorName("full-orbit"));
         assertEquals(mirror.convergence().fullOrbitReferenceError(), floor.getYData()[0]);
         assertTrue(mirror.convergence().fullOrbitReferenceError() > 0);
