@@ -73,7 +73,7 @@ public final class Plots {
     }
 
     /** Legend name of the reference's μ curve. */
-    static final String MU_REFERENCE = "full-orbit reference (physical ripple)";
+    static final String MU_REFERENCE = "full-orbit reference (physical ripple, to its tolerance)";
     /** Legend name of the reference's energy curve. */
     static final String ENERGY_REFERENCE = "full-orbit reference (its own error)";
 
