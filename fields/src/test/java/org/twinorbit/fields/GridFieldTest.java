@@ -32,7 +32,7 @@ class GridFieldTest {
     private static final double[] LO = {0.7, -0.3, -0.3};
     private static final double[] HI = {1.3, 0.3, 0.3};
 
-    private GridField grid(Field f, int nodes, String name) {
+    private GriddedField grid(Field f, int nodes, String name) {
         Path file = tmp.resolve(name);
         GridFile.write(f, LO, HI, new int[] {nodes, nodes, nodes}, file);
         return GridFile.read(file);
@@ -73,7 +73,7 @@ class GridFieldTest {
     @Test
     void theGridIsTheDomainAndLIsTheFilesOwn() {
         Field toroidal = Fields.create("toroidal", Species.PROTON);
-        GridField g = grid(toroidal, 8, "g.h5");
+        GriddedField g = grid(toroidal, 8, "g.h5");
         assertTrue(g.inDomain(1.0, 0.0, 0.0));
         assertTrue(!g.inDomain(1.31, 0.0, 0.0) && !g.inDomain(1.0, 0.0, -0.31));
         assertEquals(toroidal.length(), g.length(), 0.0);
