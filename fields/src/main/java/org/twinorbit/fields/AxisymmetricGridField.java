@@ -11,8 +11,10 @@ import org.twinorbit.shared.Vec3;
  * exactly the interpolant's, and it keeps the symmetry exactly (nothing depends on φ), so p_φ stays
  * a true invariant of the interpolated field. B and the Jacobian are the interpolant and its own
  * derivative, turned into Cartesian components by {@link CylindricalBasis}. Error: O(h³) in B and
- * O(h²) in the Jacobian for a smooth field. The domain is R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1; a particle
- * leaving it is lost.
+ * O(h²) in the Jacobian for a smooth field. An electrostatic potential Φ(R, Z) on the same nodes,
+ * when given, is interpolated the same way and E = −∇Φ is the interpolant's own gradient, so
+ * W = kinetic + qΦ is an exact invariant of the interpolated field. The domain is R0 ≤ R ≤ R1,
+ * Z0 ≤ Z ≤ Z1; a particle leaving it is lost.
  */
 public final class AxisymmetricGridField implements GriddedField {
 
@@ -24,20 +26,25 @@ public final class AxisymmetricGridField implements GriddedField {
     private final String meaning;
     private final List<Invariant> invariants;
     private volatile Double divergence;
+    private final boolean electric;
 
     /**
      * @param name    the field's name in reports
      * @param r       the R nodes (m), uniform, increasing, &gt; 0, at least 4
      * @param z       the Z nodes (m), uniform, increasing, at least 4
      * @param b       B_R, B_φ, B_Z (T) at the nodes, [component][iR][iZ]
+     * @param pot     Φ (V) at the nodes, [iR][iZ]; null for a field without E
      * @param length  the field's length L (m) that defines ε
      * @param meaning what L means, for reports
      */
-    public AxisymmetricGridField(String name, double[] r, double[] z, double[][][] b, double length, String meaning) {
+    public AxisymmetricGridField(String name, double[] r, double[] z, double[][][] b, double[][] pot, double length,
+                                 String meaning) {
         this.name = name;
         this.r = r;
         this.z = z;
-        this.table = new BicubicTable(new double[] {r[0], z[0]}, new double[] {step(r), step(z)}, b);
+        this.electric = pot != null;
+        this.table = new BicubicTable(new double[] {r[0], z[0]}, new double[] {step(r), step(z)},
+                electric ? new double[][][] {b[0], b[1], b[2], pot} : b);
         this.length = length;
         this.meaning = meaning;
         this.invariants = List.of(Invariants.energy(this));
@@ -50,9 +57,9 @@ public final class AxisymmetricGridField implements GriddedField {
     @Override public String name() { return name; }
 
     private static final class Scratch {
-        final double[] val = new double[3];
-        final double[][] rz = new double[3][2];
-        final double[][] grad = new double[3][3];
+        final double[] val = new double[4];
+        final double[][] rz = new double[4][2];
+        final double[][] grad = new double[4][3];
     }
 
     private final ThreadLocal<Scratch> scratch = ThreadLocal.withInitial(Scratch::new);
@@ -63,13 +70,30 @@ public final class AxisymmetricGridField implements GriddedField {
         Scratch sc = scratch.get();
         double rr = Math.sqrt(x * x + y * y);
         table.evaluate(rr, zz, sc.val, sc.rz);
-        for (int c = 0; c < 3; c++) {
+        for (int c = 0; c < (electric ? 4 : 3); c++) {
             sc.grad[c][0] = sc.rz[c][0];
             sc.grad[c][1] = 0;
             sc.grad[c][2] = sc.rz[c][1];
         }
         CylindricalBasis.toCartesian(rr, x / rr, y / rr, sc.val, sc.grad, out);
+        if (electric) {
+            CylindricalBasis.electricField(rr, x / rr, y / rr, sc.grad[3], out);
+        }
     }
+
+    /** The interpolated Φ (V); 0 without one. */
+    @Override
+    public double potential(double t, double x, double y, double zz) {
+        if (!electric) {
+            return 0;
+        }
+        Scratch sc = scratch.get();
+        table.evaluate(Math.sqrt(x * x + y * y), zz, sc.val, sc.rz);
+        return sc.val[3];
+    }
+
+    /** E, when there is one, is −∇Φ of the interpolated Φ. */
+    @Override public boolean hasPotential() { return true; }
 
     /** Not known for a field given only as B on a grid: NaN (no canonical invariant uses it). */
     @Override
@@ -79,7 +103,7 @@ public final class AxisymmetricGridField implements GriddedField {
 
     @Override public double length() { return length; }
     @Override public String lengthMeaning() { return meaning; }
-    @Override public boolean hasElectricField() { return false; }
+    @Override public boolean hasElectricField() { return electric; }
 
     @Override
     public double domainMargin(double x, double y, double zz) {
@@ -105,7 +129,7 @@ public final class AxisymmetricGridField implements GriddedField {
     @Override
     public String gridSummary() {
         return String.format(java.util.Locale.ROOT, "axisymmetric grid of %d x %d nodes (R, Z), spacing %.4g, %.4g m, "
-                + "bicubic Hermite", r.length, z.length, step(r), step(z));
+                + "bicubic Hermite%s", r.length, z.length, step(r), step(z), electric ? ", with Phi" : "");
     }
 
     @Override

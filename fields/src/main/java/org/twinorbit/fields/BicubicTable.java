@@ -1,7 +1,7 @@
 package org.twinorbit.fields;
 
 /**
- * Bicubic Hermite interpolation of three components on a uniform 2-D grid: the tensor product of
+ * Bicubic Hermite interpolation of several components on a uniform 2-D grid: the tensor product of
  * cubic Hermite polynomials built from the nodal values and the nodal derivatives ∂/∂1, ∂/∂2 and
  * ∂²/∂1∂2, the derivatives being second-order differences of the grid ({@link CubicHermite#diff}).
  * Value and first derivatives are continuous across cells, and the derivatives returned are the
@@ -18,7 +18,7 @@ final class BicubicTable {
     /**
      * @param origin  the first node's coordinate along each axis
      * @param spacing the node spacing along each axis (the axis's unit)
-     * @param values  the three components at the nodes, [component][i][k]
+     * @param values  the components at the nodes, [component][i][k]
      */
     BicubicTable(double[] origin, double[] spacing, double[][][] values) {
         n[0] = values[0].length;
@@ -27,8 +27,8 @@ final class BicubicTable {
             x0[a] = origin[a];
             h[a] = spacing[a];
         }
-        data = new double[3][4][][];
-        for (int c = 0; c < 3; c++) {
+        data = new double[values.length][4][][];
+        for (int c = 0; c < values.length; c++) {
             double[][][] v = {values[c]};
             double[][][] d1 = CubicHermite.diff(v, 1, h[0], false);
             data[c][0] = values[c];
@@ -61,7 +61,7 @@ final class BicubicTable {
         }
         double[][] w = sc.w;
         double[][] dw = sc.dw;
-        for (int c = 0; c < 3; c++) {
+        for (int c = 0; c < data.length; c++) {
             double v = 0, g0 = 0, g1 = 0;
             double[][][] dc = data[c];
             for (int ci = 0; ci < 2; ci++) {

@@ -49,4 +49,15 @@ final class CylindricalBasis {
         d[7] = sin * zR + cr * zP;
         d[8] = zZ;
     }
+
+    /**
+     * E = −∇Φ (V/m) into out from the derivatives of Φ along R (V/m), φ (V/rad) and Z (V/m).
+     *
+     * @param r R (m), &gt; 0
+     */
+    static void electricField(double r, double cos, double sin, double[] g, FieldSample out) {
+        out.ex = -(cos * g[0] - sin / r * g[1]);
+        out.ey = -(sin * g[0] + cos / r * g[1]);
+        out.ez = -g[2];
+    }
 }

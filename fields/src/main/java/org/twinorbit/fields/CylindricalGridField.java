@@ -14,8 +14,10 @@ import org.twinorbit.shared.Vec3;
  * are interpolated rather than B_x, B_y because they vary slowly along φ in the near-axisymmetric
  * fields such grids hold. B and the Jacobian are the interpolant and its own derivative, turned
  * into Cartesian components by {@link CylindricalBasis}. Error: O(h³) in B and O(h²) in the
- * Jacobian for a smooth field. The domain is R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1; a particle leaving it is
- * lost.
+ * Jacobian for a smooth field. An electrostatic potential Φ on the same nodes, when given, is
+ * interpolated the same way and E = −∇Φ is the interpolant's own gradient, so W = kinetic + qΦ is
+ * an exact invariant of the interpolated field. The domain is R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1; a
+ * particle leaving it is lost.
  */
 public final class CylindricalGridField implements GriddedField {
 
@@ -28,6 +30,7 @@ public final class CylindricalGridField implements GriddedField {
     private final String meaning;
     private final List<Invariant> invariants;
     private volatile Double divergence;
+    private final boolean electric;
 
     /**
      * @param name    the field's name in reports
@@ -36,18 +39,21 @@ public final class CylindricalGridField implements GriddedField {
      *                (count × spacing = 2π)
      * @param z       the Z nodes (m), uniform, increasing, at least 4
      * @param b       B_R, B_φ, B_Z (T) at the nodes, [component][iR][iφ][iZ]
+     * @param pot     Φ (V) at the nodes, [iR][iφ][iZ]; null for a field without E
      * @param length  the field's length L (m) that defines ε
      * @param meaning what L means, for reports
      */
-    public CylindricalGridField(String name, double[] r, double[] phi, double[] z, double[][][][] b, double length,
-                                String meaning) {
+    public CylindricalGridField(String name, double[] r, double[] phi, double[] z, double[][][][] b, double[][][] pot,
+                                double length, String meaning) {
         this.name = name;
         this.r = r;
         this.phi = phi;
         this.z = z;
         double[] origin = {r[0], phi[0], z[0]};
         double[] h = {step(r), 2 * Math.PI / phi.length, step(z)};
-        this.table = new TricubicTable(origin, h, b, new boolean[] {false, true, false});
+        this.electric = pot != null;
+        this.table = new TricubicTable(origin, h, electric ? new double[][][][] {b[0], b[1], b[2], pot} : b,
+                new boolean[] {false, true, false});
         this.length = length;
         this.meaning = meaning;
         this.invariants = List.of(Invariants.energy(this));
@@ -60,8 +66,8 @@ public final class CylindricalGridField implements GriddedField {
     @Override public String name() { return name; }
 
     private static final class Scratch {
-        final double[] val = new double[3];
-        final double[][] grad = new double[3][3];
+        final double[] val = new double[4];
+        final double[][] grad = new double[4][3];
     }
 
     private final ThreadLocal<Scratch> scratch = ThreadLocal.withInitial(Scratch::new);
@@ -74,7 +80,24 @@ public final class CylindricalGridField implements GriddedField {
         double p = Math.atan2(y, x);
         table.evaluate(rr, p, zz, sc.val, sc.grad);
         CylindricalBasis.toCartesian(rr, x / rr, y / rr, sc.val, sc.grad, out);
+        if (electric) {
+            CylindricalBasis.electricField(rr, x / rr, y / rr, sc.grad[3], out);
+        }
     }
+
+    /** The interpolated Φ (V); 0 without one. */
+    @Override
+    public double potential(double t, double x, double y, double zz) {
+        if (!electric) {
+            return 0;
+        }
+        Scratch sc = scratch.get();
+        table.evaluate(Math.sqrt(x * x + y * y), Math.atan2(y, x), zz, sc.val, sc.grad);
+        return sc.val[3];
+    }
+
+    /** E, when there is one, is −∇Φ of the interpolated Φ. */
+    @Override public boolean hasPotential() { return true; }
 
     /** Not known for a field given only as B on a grid: NaN (no canonical invariant uses it). */
     @Override
@@ -84,7 +107,7 @@ public final class CylindricalGridField implements GriddedField {
 
     @Override public double length() { return length; }
     @Override public String lengthMeaning() { return meaning; }
-    @Override public boolean hasElectricField() { return false; }
+    @Override public boolean hasElectricField() { return electric; }
 
     @Override
     public double domainMargin(double x, double y, double zz) {
@@ -110,8 +133,8 @@ public final class CylindricalGridField implements GriddedField {
     @Override
     public String gridSummary() {
         return String.format(java.util.Locale.ROOT, "cylindrical grid of %d x %d x %d nodes (R, phi, Z), spacing %.4g m, "
-                + "%.4g rad, %.4g m, tricubic Hermite, periodic in phi", r.length, phi.length, z.length, step(r),
-                2 * Math.PI / phi.length, step(z));
+                + "%.4g rad, %.4g m, tricubic Hermite, periodic in phi%s", r.length, phi.length, z.length, step(r),
+                2 * Math.PI / phi.length, step(z), electric ? ", with Phi" : "");
     }
 
     @Override

@@ -10,7 +10,10 @@ import org.twinorbit.shared.Vec3;
  * Meth. Eng. 63, 2005). The interpolant and its first derivatives are continuous across cells,
  * and the Jacobian reported is the interpolant's own derivative, so the guiding-center equations
  * see one consistent field. Error: O(h³) in B and O(h²) in its Jacobian for a smooth field (the
- * O(h²) nodal differences set it). The domain is the grid box; a particle leaving it is lost.
+ * O(h²) nodal differences set it). An electrostatic potential Φ on the same nodes, when given, is
+ * interpolated the same way and E = −∇Φ is the interpolant's own gradient (O(h²)), so the energy
+ * W = kinetic + qΦ is an exact invariant of the interpolated field. The domain is the grid box; a
+ * particle leaving it is lost.
  */
 public final class GridField implements GriddedField {
 
@@ -24,15 +27,17 @@ public final class GridField implements GriddedField {
     private final String meaning;
     private final List<Invariant> invariants;
     private volatile Double divergence;
+    private final boolean electric;
 
     /**
      * @param name   the field's name in reports
      * @param axes   the grid coordinates (m) along x, y and z, uniform, at least 4 nodes each
      * @param b      B_x, B_y, B_z (T) at the nodes, [component][i][j][k]
+     * @param phi    Φ (V) at the nodes, [i][j][k]; null for a field without E
      * @param length the field's length L (m) that defines ε
      * @param meaning what L means, for reports
      */
-    public GridField(String name, double[][] axes, double[][][][] b, double length, String meaning) {
+    public GridField(String name, double[][] axes, double[][][][] b, double[][][] phi, double length, String meaning) {
         this.name = name;
         this.axes = axes;
         for (int a = 0; a < 3; a++) {
@@ -40,7 +45,8 @@ public final class GridField implements GriddedField {
             x0[a] = axes[a][0];
             h[a] = (axes[a][n[a] - 1] - axes[a][0]) / (n[a] - 1);
         }
-        this.table = new TricubicTable(x0, h, b, new boolean[3]);
+        this.electric = phi != null;
+        this.table = new TricubicTable(x0, h, electric ? new double[][][][] {b[0], b[1], b[2], phi} : b, new boolean[3]);
         this.length = length;
         this.meaning = meaning;
         this.invariants = List.of(Invariants.energy(this));
@@ -50,8 +56,8 @@ public final class GridField implements GriddedField {
 
     /** Per-thread scratch, so that an evaluation allocates nothing. */
     private static final class Scratch {
-        final double[] val = new double[3];
-        final double[][] grad = new double[3][3];
+        final double[] val = new double[4];
+        final double[][] grad = new double[4][3];
     }
 
     private final ThreadLocal<Scratch> scratch = ThreadLocal.withInitial(Scratch::new);
@@ -69,7 +75,26 @@ public final class GridField implements GriddedField {
                 out.dB[3 * c + a] = sc.grad[c][a];
             }
         }
+        if (electric) {
+            out.ex = -sc.grad[3][0];
+            out.ey = -sc.grad[3][1];
+            out.ez = -sc.grad[3][2];
+        }
     }
+
+    /** The interpolated Φ (V); 0 without one. */
+    @Override
+    public double potential(double t, double x, double y, double z) {
+        if (!electric) {
+            return 0;
+        }
+        Scratch sc = scratch.get();
+        table.evaluate(x, y, z, sc.val, sc.grad);
+        return sc.val[3];
+    }
+
+    /** E, when there is one, is −∇Φ of the interpolated Φ. */
+    @Override public boolean hasPotential() { return true; }
 
     /** Not known for a field given only as B on a grid: NaN (no canonical invariant uses it). */
     @Override
@@ -79,7 +104,7 @@ public final class GridField implements GriddedField {
 
     @Override public double length() { return length; }
     @Override public String lengthMeaning() { return meaning; }
-    @Override public boolean hasElectricField() { return false; }
+    @Override public boolean hasElectricField() { return electric; }
 
     @Override
     public double domainMargin(double x, double y, double z) {
@@ -110,7 +135,7 @@ public final class GridField implements GriddedField {
     @Override
     public String gridSummary() {
         return String.format(java.util.Locale.ROOT, "cartesian grid of %d x %d x %d nodes (x, y, z), spacing %.4g, %.4g, "
-                + "%.4g m, tricubic Hermite", n[0], n[1], n[2], h[0], h[1], h[2]);
+                + "%.4g m, tricubic Hermite%s", n[0], n[1], n[2], h[0], h[1], h[2], electric ? ", with Phi" : "");
     }
 
     @Override

@@ -30,9 +30,10 @@ import org.twinorbit.shared.FieldSample;
  *   /br_t, /bphi_t, /bz_t     B_R, B_φ, B_Z (T), [nr][nz]
  * every geometry
  *   /length_m                 [1]: the length L (m) that defines ε = ρ0/L
+ *   /phi_v                    optional: the electrostatic potential Φ (V) on the nodes, shaped like
+ *                             the B components; E = −∇Φ of its interpolant
  * </pre>
- * The domain is the grid (box or annulus); a particle leaving it is lost. No E or Φ is stored:
- * gridded fields are magnetostatic. A field of the library is named {@code grid:PATH} to load one
+ * The domain is the grid (box or annulus); a particle leaving it is lost. Fields are static. A field of the library is named {@code grid:PATH} to load one
  * ({@link Fields#create}).
  */
 public final class GridFile {
@@ -42,6 +43,7 @@ public final class GridFile {
 
     private static final String GEOMETRY = "geometry";
     private static final String UNIT = "unit";
+    private static final String POTENTIAL = "phi_v";
 
     private GridFile() {}
 
@@ -61,9 +63,11 @@ public final class GridFile {
                     double[][][][] b = new double[3][][][];
                     String[] bn = {"bx_t", "by_t", "bz_t"};
                     for (int c = 0; c < 3; c++) {
-                        b[c] = cube(h, bn[c], where, axes[0].length, axes[1].length, axes[2].length);
+                        b[c] = cube(h, bn[c], "T", where, axes[0].length, axes[1].length, axes[2].length);
                     }
-                    return new GridField(name, axes, b, length(h, where), meaning);
+                    double[][][] pot = h.getChildren().containsKey(POTENTIAL)
+                            ? cube(h, POTENTIAL, "V", where, axes[0].length, axes[1].length, axes[2].length) : null;
+                    return new GridField(name, axes, b, pot, length(h, where), meaning);
                 }
                 case CYLINDRICAL -> {
                     double[] r = radius(h, where);
@@ -72,9 +76,11 @@ public final class GridFile {
                     double[][][][] b = new double[3][][][];
                     String[] bn = {"br_t", "bphi_t", "bz_t"};
                     for (int c = 0; c < 3; c++) {
-                        b[c] = cube(h, bn[c], where, r.length, phi.length, z.length);
+                        b[c] = cube(h, bn[c], "T", where, r.length, phi.length, z.length);
                     }
-                    return new CylindricalGridField(name, r, phi, z, b, length(h, where), meaning);
+                    double[][][] pot = h.getChildren().containsKey(POTENTIAL)
+                            ? cube(h, POTENTIAL, "V", where, r.length, phi.length, z.length) : null;
+                    return new CylindricalGridField(name, r, phi, z, b, pot, length(h, where), meaning);
                 }
                 default -> {
                     double[] r = radius(h, where);
@@ -82,9 +88,11 @@ public final class GridFile {
                     double[][][] b = new double[3][][];
                     String[] bn = {"br_t", "bphi_t", "bz_t"};
                     for (int c = 0; c < 3; c++) {
-                        b[c] = square(h, bn[c], where, r.length, z.length);
+                        b[c] = square(h, bn[c], "T", where, r.length, z.length);
                     }
-                    return new AxisymmetricGridField(name, r, z, b, length(h, where), meaning);
+                    double[][] pot = h.getChildren().containsKey(POTENTIAL)
+                            ? square(h, POTENTIAL, "V", where, r.length, z.length) : null;
+                    return new AxisymmetricGridField(name, r, z, b, pot, length(h, where), meaning);
                 }
             }
         } catch (FieldParameterException e) {
@@ -109,7 +117,8 @@ public final class GridFile {
     }
 
     /**
-     * Samples a field on a uniform Cartesian grid and writes it in this layout.
+     * Samples a field on a uniform Cartesian grid and writes it in this layout, with Φ when the
+     * field has E.
      *
      * @param lo    the grid's lower corner (m)
      * @param hi    its upper corner (m)
@@ -120,7 +129,9 @@ public final class GridFile {
         for (int a = 0; a < 3; a++) {
             axes[a] = nodes(lo[a], hi[a], nodes[a]);
         }
+        staticWithPotential(f);
         double[][][][] b = new double[3][nodes[0]][nodes[1]][nodes[2]];
+        double[][][] pot = new double[nodes[0]][nodes[1]][nodes[2]];
         FieldSample s = new FieldSample();
         for (int i = 0; i < nodes[0]; i++) {
             for (int j = 0; j < nodes[1]; j++) {
@@ -129,11 +140,15 @@ public final class GridFile {
                     b[0][i][j][k] = s.bx;
                     b[1][i][j][k] = s.by;
                     b[2][i][j][k] = s.bz;
+                    pot[i][j][k] = f.potential(0, axes[0][i], axes[1][j], axes[2][k]);
                 }
             }
         }
         try (WritableHdfFile out = HdfFile.write(file)) {
             out.putAttribute(GEOMETRY, GridGeometry.CARTESIAN.key());
+            if (f.hasElectricField()) {
+                put(out, POTENTIAL, pot, "V");
+            }
             put(out, "x_m", axes[0], "m");
             put(out, "y_m", axes[1], "m");
             put(out, "z_m", axes[2], "m");
@@ -146,7 +161,7 @@ public final class GridFile {
 
     /**
      * Samples a field on a uniform cylindrical grid, φ over one full turn, and writes it in this
-     * layout.
+     * layout, with Φ when the field has E.
      *
      * @param rLo  smallest R (m), &gt; 0
      * @param rHi  largest R (m)
@@ -164,7 +179,9 @@ public final class GridFile {
         for (int j = 0; j < nPhi; j++) {
             phi[j] = 2 * Math.PI * j / nPhi;
         }
+        staticWithPotential(f);
         double[][][][] b = new double[3][nR][nPhi][nZ];
+        double[][][] pot = new double[nR][nPhi][nZ];
         double[] c = new double[3];
         for (int i = 0; i < nR; i++) {
             for (int j = 0; j < nPhi; j++) {
@@ -173,11 +190,15 @@ public final class GridFile {
                     b[0][i][j][k] = c[0];
                     b[1][i][j][k] = c[1];
                     b[2][i][j][k] = c[2];
+                    pot[i][j][k] = f.potential(0, r[i] * Math.cos(phi[j]), r[i] * Math.sin(phi[j]), z[k]);
                 }
             }
         }
         try (WritableHdfFile out = HdfFile.write(file)) {
             out.putAttribute(GEOMETRY, GridGeometry.CYLINDRICAL.key());
+            if (f.hasElectricField()) {
+                put(out, POTENTIAL, pot, "V");
+            }
             put(out, "r_m", r, "m");
             put(out, "phi_rad", phi, "rad");
             put(out, "z_m", z, "m");
@@ -189,7 +210,8 @@ public final class GridFile {
     }
 
     /**
-     * Samples an axisymmetric field on a uniform (R, Z) grid at φ = 0 and writes it in this layout.
+     * Samples an axisymmetric field on a uniform (R, Z) grid at φ = 0 and writes it in this layout,
+     * with Φ when the field has E.
      *
      * @param rLo smallest R (m), &gt; 0
      * @param rHi largest R (m)
@@ -204,7 +226,9 @@ public final class GridFile {
                                          Path file) {
         double[] r = nodes(rLo, rHi, nR);
         double[] z = nodes(zLo, zHi, nZ);
+        staticWithPotential(f);
         double[][][] b = new double[3][nR][nZ];
+        double[][] pot = new double[nR][nZ];
         double[] c = new double[3];
         double[] turned = new double[3];
         double worst = 0, scale = 0;
@@ -217,6 +241,12 @@ public final class GridFile {
                     worst = Math.max(worst, Math.abs(c[m] - turned[m]));
                     scale = Math.max(scale, Math.abs(c[m]));
                 }
+                pot[i][k] = f.potential(0, r[i], 0, z[k]);
+                double potTurned = f.potential(0, r[i] * Math.cos(1), r[i] * Math.sin(1), z[k]);
+                if (Math.abs(pot[i][k] - potTurned) > 1e-9 * Math.max(Math.abs(pot[i][k]), Math.abs(potTurned))) {
+                    throw new FieldParameterException("field " + f.name() + " is not axisymmetric about the z axis "
+                            + "(Phi changes between phi = 0 and 1 rad); use the cylindrical or cartesian geometry");
+                }
             }
         }
         if (worst > 1e-9 * scale) {
@@ -226,12 +256,23 @@ public final class GridFile {
         }
         try (WritableHdfFile out = HdfFile.write(file)) {
             out.putAttribute(GEOMETRY, GridGeometry.AXISYMMETRIC.key());
+            if (f.hasElectricField()) {
+                put(out, POTENTIAL, pot, "V");
+            }
             put(out, "r_m", r, "m");
             put(out, "z_m", z, "m");
             put(out, "br_t", b[0], "T");
             put(out, "bphi_t", b[1], "T");
             put(out, "bz_t", b[2], "T");
             put(out, "length_m", new double[] {f.length()}, "m");
+        }
+    }
+
+    /** @throws FieldParameterException unless f is static and its E, if any, has a potential */
+    private static void staticWithPotential(Field f) {
+        if (!f.isStatic() || (f.hasElectricField() && !f.hasPotential())) {
+            throw new FieldParameterException("field " + f.name() + " is not static with E = -grad Phi; a grid file "
+                    + "holds a static B and optionally Phi");
         }
     }
 
@@ -317,8 +358,8 @@ public final class GridFile {
         return v;
     }
 
-    private static double[][][] cube(HdfFile h, String name, String where, int n0, int n1, int n2) {
-        Object d = data(h, name, "T", where);
+    private static double[][][] cube(HdfFile h, String name, String unit, String where, int n0, int n1, int n2) {
+        Object d = data(h, name, unit, where);
         if (!(d instanceof double[][][] v) || v.length != n0 || v[0].length != n1 || v[0][0].length != n2) {
             throw new FieldParameterException(where + ": /" + name + " must be a " + n0 + " x " + n1 + " x " + n2
                     + " array of 64-bit floats (the grid's nodes)");
@@ -329,8 +370,8 @@ public final class GridFile {
         return v;
     }
 
-    private static double[][] square(HdfFile h, String name, String where, int n0, int n1) {
-        Object d = data(h, name, "T", where);
+    private static double[][] square(HdfFile h, String name, String unit, String where, int n0, int n1) {
+        Object d = data(h, name, unit, where);
         if (!(d instanceof double[][] v) || v.length != n0 || v[0].length != n1) {
             throw new FieldParameterException(where + ": /" + name + " must be a " + n0 + " x " + n1
                     + " array of 64-bit floats (the grid's R, Z nodes)");

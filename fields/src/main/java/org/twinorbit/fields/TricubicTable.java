@@ -1,7 +1,7 @@
 package org.twinorbit.fields;
 
 /**
- * Tricubic Hermite interpolation of three components on a uniform 3-D grid: the tensor product of
+ * Tricubic Hermite interpolation of several components on a uniform 3-D grid: the tensor product of
  * cubic Hermite polynomials along each axis, built from the nodal values and the nodal derivatives
  * ∂/∂1, ∂/∂2, ∂/∂3, ∂²/∂1∂2, ∂²/∂1∂3, ∂²/∂2∂3, ∂³/∂1∂2∂3 (Lekien &amp; Marsden, Int. J. Numer.
  * Meth. Eng. 63, 2005), the derivatives being second-order differences of the grid
@@ -21,7 +21,7 @@ final class TricubicTable {
     /**
      * @param origin   the first node's coordinate along each axis
      * @param spacing  the node spacing along each axis (the axis's unit)
-     * @param values   the three components at the nodes, [component][i][j][k]
+     * @param values   the components at the nodes, [component][i][j][k]
      * @param periodic per axis: true when the axis wraps round (nodes cover one full period)
      */
     TricubicTable(double[] origin, double[] spacing, double[][][][] values, boolean[] periodic) {
@@ -33,8 +33,8 @@ final class TricubicTable {
             x0[a] = origin[a];
             h[a] = spacing[a];
         }
-        data = new double[3][8][][][];
-        for (int c = 0; c < 3; c++) {
+        data = new double[values.length][8][][][];
+        for (int c = 0; c < values.length; c++) {
             data[c][0] = values[c];
             data[c][1] = CubicHermite.diff(values[c], 0, h[0], periodic[0]);
             data[c][2] = CubicHermite.diff(values[c], 1, h[1], periodic[1]);
@@ -81,7 +81,7 @@ final class TricubicTable {
         }
         double[][] w = sc.w;
         double[][] dw = sc.dw;
-        for (int c = 0; c < 3; c++) {
+        for (int c = 0; c < data.length; c++) {
             double v = 0, g0 = 0, g1 = 0, g2 = 0;
             double[][][][] dc = data[c];
             for (int ci = 0; ci < 2; ci++) {

@@ -22,7 +22,7 @@ import org.twinorbit.shared.Species;
  * Eng. 63, 2005, for the interpolant; the difference error is common practice), so halving the
  * spacing must cut the B error by at least 2^2.6 and the Jacobian error by 2^1.6. The
  * interpolant of the vacuum toroidal field stays divergence-free to the same order. Files that
- * are not a grid are refused with the problem named: 15 malformed HDF5 files in all.
+ * are not a grid are refused with the problem named: 16 malformed HDF5 files in all.
  */
 class GridFieldTest {
 
@@ -168,7 +168,7 @@ class GridFieldTest {
     }
 
     /**
-     * The curvilinear half of the corpus: 9 more malformed HDF5 files (15 with the 6 above), each
+     * The curvilinear half of the corpus: 10 more malformed HDF5 files (16 with the 6 above), each
      * refused with the dataset or attribute named; a well-formed one of each geometry reads.
      */
     @Test
@@ -199,5 +199,7 @@ class GridFieldTest {
             f.putDataset("r_m", new double[] {50, 60, 70, 80}).putAttribute("unit", "cm");
         });
         refused(unit, "/r_m has unit 'cm'; it must be m");
+        refused(curvilinear("phi-shape.h5", "axisymmetric", java.util.Map.of("phi_v", new double[4][3])),
+                "/phi_v must be a 4 x 4 array");
     }
 }

@@ -58,8 +58,9 @@ public final class GridCommand implements Callable<Integer> {
         } catch (FieldParameterException e) {
             throw new BadInputException("field: " + e.getMessage());
         }
-        if (!f.isStatic() || f.hasElectricField()) {
-            throw new BadInputException("--field: a grid file holds a static magnetic field; '" + field + "' is not one");
+        if (!f.isStatic() || (f.hasElectricField() && !f.hasPotential())) {
+            throw new BadInputException("--field: a grid file holds a static B and optionally Phi (E = -grad Phi); '"
+                    + field + "' is not such a field");
         }
         if (!Double.isFinite(f.length())) {
             throw new BadInputException("--field: '" + field + "' has no length L, which a grid file must carry");
