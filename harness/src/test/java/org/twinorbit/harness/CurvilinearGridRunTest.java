@@ -51,6 +51,10 @@ class CurvilinearGridRunTest {
         assertTrue(wrote.contains("max |div B| L/|B| of the interpolant over the cell centres = "), wrote);
         TestCommandLine.succeeded("grid", "--field", "mirror", "--geometry", "cylindrical", "--box", "0.02,0.3,-1,1",
                 "--nodes", "8,6,9", "--out", cyl.toString());
+        String info = TestCommandLine.succeeded("fields", "--grid-file", axi.toString());
+        assertTrue(info.contains("axisymmetric grid of 8 x 9 nodes (R, Z)") && info.contains("max |div B| L/|B| of the "
+                + "interpolant over the cell centres: "), info);
+        assertEquals(2, TestCommandLine.exec("fields", "--grid-file", tmp.resolve("none.h5").toString()).code());
         String[] common = {"--start", "0.1,0,0", "--eps", "0.02", "--pitch", "60", "--duration", "1", "--duration-unit",
             "bounces", "--pushers", "none", "--gc-integrators", "none", "--phases", "2", "--quiet", "--json"};
         JsonNode a = row(run("mirror", common), "gc-reference");
