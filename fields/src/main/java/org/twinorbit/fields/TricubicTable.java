@@ -15,8 +15,18 @@ final class TricubicTable {
     private final double[] h = new double[3];
     private final int[] n = new int[3];
     private final boolean[] periodic;
-    /** Per component c: value and derivative tables [c][d][i][j][k], d over the 8 Hermite data. */
-    private final double[][][][][] data;
+    private final int components;
+    /**
+     * Values and derivatives, node-major so that a cell corner's data sit together: entry
+     * ((node · components + c) · 8 + d), node = (i · n1 + j) · n2 + k, d over the 8 Hermite data
+     * (value, ∂1, ∂2, ∂3, ∂1∂2, ∂1∂3, ∂2∂3, ∂1∂2∂3).
+     */
+    private final double[] table;
+
+    /** Per Hermite datum d: whether the factor along axis 1, 2, 3 is a slope. */
+    private static final int[] SLOPE1 = {0, 1, 0, 0, 1, 1, 0, 1};
+    private static final int[] SLOPE2 = {0, 0, 1, 0, 1, 0, 1, 1};
+    private static final int[] SLOPE3 = {0, 0, 0, 1, 0, 1, 1, 1};
 
     /**
      * @param origin   the first node's coordinate along each axis
@@ -26,6 +36,7 @@ final class TricubicTable {
      */
     TricubicTable(double[] origin, double[] spacing, double[][][][] values, boolean[] periodic) {
         this.periodic = periodic.clone();
+        components = values.length;
         n[0] = values[0].length;
         n[1] = values[0][0].length;
         n[2] = values[0][0][0].length;
@@ -33,16 +44,27 @@ final class TricubicTable {
             x0[a] = origin[a];
             h[a] = spacing[a];
         }
-        data = new double[values.length][8][][][];
-        for (int c = 0; c < values.length; c++) {
-            data[c][0] = values[c];
-            data[c][1] = CubicHermite.diff(values[c], 0, h[0], periodic[0]);
-            data[c][2] = CubicHermite.diff(values[c], 1, h[1], periodic[1]);
-            data[c][3] = CubicHermite.diff(values[c], 2, h[2], periodic[2]);
-            data[c][4] = CubicHermite.diff(data[c][1], 1, h[1], periodic[1]);
-            data[c][5] = CubicHermite.diff(data[c][1], 2, h[2], periodic[2]);
-            data[c][6] = CubicHermite.diff(data[c][2], 2, h[2], periodic[2]);
-            data[c][7] = CubicHermite.diff(data[c][4], 2, h[2], periodic[2]);
+        table = new double[n[0] * n[1] * n[2] * components * 8];
+        for (int c = 0; c < components; c++) {
+            double[][][][] d = new double[8][][][];
+            d[0] = values[c];
+            d[1] = CubicHermite.diff(values[c], 0, h[0], periodic[0]);
+            d[2] = CubicHermite.diff(values[c], 1, h[1], periodic[1]);
+            d[3] = CubicHermite.diff(values[c], 2, h[2], periodic[2]);
+            d[4] = CubicHermite.diff(d[1], 1, h[1], periodic[1]);
+            d[5] = CubicHermite.diff(d[1], 2, h[2], periodic[2]);
+            d[6] = CubicHermite.diff(d[2], 2, h[2], periodic[2]);
+            d[7] = CubicHermite.diff(d[4], 2, h[2], periodic[2]);
+            for (int i = 0; i < n[0]; i++) {
+                for (int j = 0; j < n[1]; j++) {
+                    for (int k = 0; k < n[2]; k++) {
+                        int base = (((i * n[1] + j) * n[2] + k) * components + c) * 8;
+                        for (int q = 0; q < 8; q++) {
+                            table[base + q] = d[q][i][j][k];
+                        }
+                    }
+                }
+            }
         }
     }
 
@@ -52,6 +74,11 @@ final class TricubicTable {
         final int[] hi = new int[3];
         final double[][] w = new double[3][4];
         final double[][] dw = new double[3][4];
+        /** Weights of the 8 data of one corner for the value and the three derivatives. */
+        final double[] wv = new double[8];
+        final double[] w1 = new double[8];
+        final double[] w2 = new double[8];
+        final double[] w3 = new double[8];
     }
 
     private final ThreadLocal<Scratch> scratch = ThreadLocal.withInitial(Scratch::new);
@@ -79,36 +106,44 @@ final class TricubicTable {
             lo[a] = c;
             CubicHermite.basis(s - c, h[a], sc.w[a], sc.dw[a]);
         }
-        double[][] w = sc.w;
-        double[][] dw = sc.dw;
-        for (int c = 0; c < data.length; c++) {
-            double v = 0, g0 = 0, g1 = 0, g2 = 0;
-            double[][][][] dc = data[c];
-            for (int ci = 0; ci < 2; ci++) {
-                int i = ci == 0 ? lo[0] : hi[0];
-                for (int cj = 0; cj < 2; cj++) {
-                    int j = cj == 0 ? lo[1] : hi[1];
-                    for (int ck = 0; ck < 2; ck++) {
-                        int k = ck == 0 ? lo[2] : hi[2];
-                        // d = 0..7 over (value, d1, d2, d3, d12, d13, d23, d123): which factor is a slope
-                        for (int d = 0; d < 8; d++) {
-                            boolean s1 = d == 1 || d == 4 || d == 5 || d == 7;
-                            boolean s2 = d == 2 || d == 4 || d == 6 || d == 7;
-                            boolean s3 = d == 3 || d == 5 || d == 6 || d == 7;
-                            int b1 = (s1 ? 2 : 0) + ci, b2 = (s2 ? 2 : 0) + cj, b3 = (s3 ? 2 : 0) + ck;
-                            double f = dc[d][i][j][k];
-                            v += f * w[0][b1] * w[1][b2] * w[2][b3];
-                            g0 += f * dw[0][b1] * w[1][b2] * w[2][b3];
-                            g1 += f * w[0][b1] * dw[1][b2] * w[2][b3];
-                            g2 += f * w[0][b1] * w[1][b2] * dw[2][b3];
-                        }
-                    }
-                }
+        for (int c = 0; c < components; c++) {
+            val[c] = 0;
+            grad[c][0] = 0;
+            grad[c][1] = 0;
+            grad[c][2] = 0;
+        }
+        double[] wa = sc.w[0], wb = sc.w[1], wc = sc.w[2];
+        double[] da = sc.dw[0], db = sc.dw[1], dc = sc.dw[2];
+        double[] wv = sc.wv, w1 = sc.w1, w2 = sc.w2, w3 = sc.w3;
+        for (int corner = 0; corner < 8; corner++) {
+            int ci = corner >> 2, cj = (corner >> 1) & 1, ck = corner & 1;
+            int i = ci == 0 ? lo[0] : hi[0];
+            int j = cj == 0 ? lo[1] : hi[1];
+            int k = ck == 0 ? lo[2] : hi[2];
+            for (int d = 0; d < 8; d++) {
+                int b1 = 2 * SLOPE1[d] + ci, b2 = 2 * SLOPE2[d] + cj, b3 = 2 * SLOPE3[d] + ck;
+                double yz = wb[b2] * wc[b3];
+                wv[d] = wa[b1] * yz;
+                w1[d] = da[b1] * yz;
+                w2[d] = wa[b1] * db[b2] * wc[b3];
+                w3[d] = wa[b1] * wb[b2] * dc[b3];
             }
-            val[c] = v;
-            grad[c][0] = g0;
-            grad[c][1] = g1;
-            grad[c][2] = g2;
+            int base = ((i * n[1] + j) * n[2] + k) * components * 8;
+            for (int c = 0; c < components; c++) {
+                int off = base + 8 * c;
+                double v = 0, g0 = 0, g1 = 0, g2 = 0;
+                for (int d = 0; d < 8; d++) {
+                    double f = table[off + d];
+                    v += f * wv[d];
+                    g0 += f * w1[d];
+                    g1 += f * w2[d];
+                    g2 += f * w3[d];
+                }
+                val[c] += v;
+                grad[c][0] += g0;
+                grad[c][1] += g1;
+                grad[c][2] += g2;
+            }
         }
     }
 }
