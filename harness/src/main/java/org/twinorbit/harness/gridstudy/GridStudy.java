@@ -40,9 +40,27 @@ public final class GridStudy {
      */
     public record MetricRow(String metric, double analytic, List<Level> levels, double order, double needed, String how) {}
 
-    /** The whole study. */
+    /**
+     * An ε range to scan on the analytic field and on every grid (log-spaced points), for ε*.
+     *
+     * @param min    smallest ε
+     * @param max    largest ε
+     * @param points number of ε values
+     */
+    public record EpsRange(double min, double max, int points) {}
+
+    /** ε* of one metric and scan tolerance on one grid. */
+    public record EpsLevel(double spacing, String nodes, double epsStar, double relativeDifference) {}
+
+    /**
+     * ε* of one metric at one scan tolerance, analytic and on each grid; NaN where the scan does
+     * not cross the tolerance.
+     */
+    public record EpsStarRow(String metric, double scanTolerance, double analytic, List<EpsLevel> levels, double order) {}
+
+    /** The whole study; {@code epsStars} is empty without an ε range. */
     public record Result(CaseResult analytic, GridSpec coarsest, double tolerance, List<MetricRow> rows,
-                         List<Double> divergences) {}
+                         List<Double> divergences, EpsRange range, List<EpsStarRow> epsStars) {}
 
     private GridStudy() {}
 
@@ -53,6 +71,19 @@ public final class GridStudy {
      * @param tolerance the relative difference from the analytic value a metric may reach
      */
     public static Result run(Case c, GridSpec coarsest, int levels, double tolerance, CaseRunner runner) {
+        return run(c, coarsest, levels, tolerance, runner, null, 1);
+    }
+
+    /**
+     * As {@link #run(Case, GridSpec, int, double, CaseRunner)}, and with a range, a breakdown scan
+     * of the same case (its pitch, start, ensemble, duration and guiding-center start; the scan's
+     * default tolerances) on the analytic field and on every grid, for ε*.
+     *
+     * @param range   the ε range, or null for no scans
+     * @param threads worker threads of each scan point
+     */
+    public static Result run(Case c, GridSpec coarsest, int levels, double tolerance, CaseRunner runner,
+                             EpsRange range, int threads) {
         Case a = new Case(c.name(), c.field(), c.fieldParameters(), c.species(), c.start(), c.energyEv(), c.eps(),
                 c.pitchDeg(), c.phases(), c.duration(), c.durationUnit(), List.of(), c.stepsPerGyro(), List.of(),
                 c.gcStepGyro(), c.referenceRtol(), c.gcStart());
@@ -60,6 +91,9 @@ public final class GridStudy {
         Field field = ra.field();
         CaseResult analytic = runner.run(a);
         ResultRow model = model(analytic);
+        Map<String, Double> epsAnalytic = range == null ? Map.of()
+                : epsStars(scanOf(a, c.field(), c.fieldParameters(), ra, range, threads), threads);
+        List<Map<String, Double>> epsGrids = new ArrayList<>();
         List<String> metrics = new ArrayList<>();
         for (String m : ResultRow.METRICS) {
             double v = model.metric(m).worst();
@@ -88,6 +122,9 @@ public final class GridStudy {
                         List.of(), c.gcStepGyro(), c.referenceRtol(), c.gcStart());
                 grids.add(g);
                 rows.add(model(runner.run(gc)));
+                if (range != null) {
+                    epsGrids.add(epsStars(scanOf(a, GridFile.PREFIX + file, Map.of(), ra, range, threads), threads));
+                }
                 Files.deleteIfExists(file);
             }
             Files.deleteIfExists(dir);
@@ -105,7 +142,71 @@ public final class GridStudy {
             }
             out.add(row(m, exact, ls, tolerance));
         }
-        return new Result(analytic, coarsest, tolerance, out, div);
+        List<EpsStarRow> eps = new ArrayList<>();
+        for (Map.Entry<String, Double> e : epsAnalytic.entrySet()) {
+            String[] key = e.getKey().split("@");
+            List<EpsLevel> ls = new ArrayList<>();
+            List<Level> forFit = new ArrayList<>();
+            for (int l = 0; l < epsGrids.size(); l++) {
+                double g = epsGrids.get(l).getOrDefault(e.getKey(), Double.NaN);
+                double rel = Math.abs(g - e.getValue()) / e.getValue();
+                ls.add(new EpsLevel(grids.get(l).spacing(), grids.get(l).nodesText(), g, rel));
+                forFit.add(new Level(grids.get(l).spacing(), grids.get(l).nodesText(), g, rel, div.get(l)));
+            }
+            eps.add(new EpsStarRow(key[0], Double.parseDouble(key[1]), e.getValue(), ls, fittedOrder(forFit)));
+        }
+        return new Result(analytic, coarsest, tolerance, out, div, range, eps);
+    }
+
+    /** The breakdown scan of the study's case on one field (the ε range replaces its energy). */
+    private static org.twinorbit.harness.scan.ScanRequest.Built scanOf(Case c, String field, Map<String, Double> params,
+                                                                      ResolvedCase ra, EpsRange range, int threads) {
+        org.twinorbit.harness.scan.ScanRequest q = new org.twinorbit.harness.scan.ScanRequest();
+        q.field = field;
+        q.parameters = new java.util.LinkedHashMap<>(params);
+        q.species = c.species();
+        q.pitches = List.of(c.pitchDeg());
+        q.epsMin = range.min();
+        q.epsMax = range.max();
+        q.points = range.points();
+        q.start = List.of(ra.start().x(), ra.start().y(), ra.start().z());
+        q.phases = c.phases();
+        q.duration = c.duration();
+        q.durationUnit = org.twinorbit.harness.scan.ScanDuration.Unit.parse(c.durationUnit().label());
+        q.referenceRtol = c.referenceRtol();
+        q.gcStart = c.gcStart();
+        q.threads = threads;
+        return q.build();
+    }
+
+    /** ε* by "metric@tolerance" for every threshold the scan crossed. */
+    private static Map<String, Double> epsStars(org.twinorbit.harness.scan.ScanRequest.Built b, int threads) {
+        Path dir;
+        try {
+            dir = Files.createTempDirectory("twinorbit-gridstudy-scan");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot create a temporary folder for a scan", e);
+        }
+        org.twinorbit.harness.scan.ScanResult r = b.scan().run(b.evaluator(), dir, false, threads,
+                org.twinorbit.harness.scan.ScanProgress.NONE);
+        deleteTree(dir);
+        Map<String, Double> out = new java.util.LinkedHashMap<>();
+        for (org.twinorbit.harness.scan.Threshold t : r.thresholds()) {
+            if (t.outcome() == org.twinorbit.harness.scan.ThresholdOutcome.CROSSED && Double.isFinite(t.epsStar())) {
+                out.put(t.metric().key() + "@" + t.tolerance(), t.epsStar());
+            }
+        }
+        return out;
+    }
+
+    private static void deleteTree(Path dir) {
+        try (java.util.stream.Stream<Path> s = Files.walk(dir)) {
+            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot remove the temporary scan folder " + dir, e);
+        }
     }
 
     private static MetricRow row(String metric, double exact, List<Level> ls, double tolerance) {

@@ -22,7 +22,24 @@ public final class GridStudyTables {
     /** The answer table's heading. */
     public static final List<String> ANSWER_HEADER = List.of("metric", "tolerance", "fitted order", "h needed (m)", "how");
 
+    /** The ε* table's heading (with a scan range). */
+    public static final List<String> EPS_HEADER = List.of("metric", "scan tolerance", "h (m)", "nodes", "eps* on the grid",
+            "eps* analytic", "rel. difference", "fitted order");
+
     private GridStudyTables() {}
+
+    public static TextTable epsStars(GridStudy.Result r) {
+        TextTable t = new TextTable(EPS_HEADER);
+        for (GridStudy.EpsStarRow e : r.epsStars()) {
+            for (GridStudy.EpsLevel l : e.levels()) {
+                t.add(List.of(e.metric(), Format.number(e.scanTolerance()), Format.number(l.spacing()), l.nodes(),
+                        Double.isNaN(l.epsStar()) ? "not crossed" : Format.number(l.epsStar()), Format.number(e.analytic()),
+                        Double.isNaN(l.relativeDifference()) ? "—" : Format.number(l.relativeDifference()),
+                        Double.isNaN(e.order()) ? "—" : Format.number(e.order())));
+            }
+        }
+        return t;
+    }
 
     public static TextTable levels(GridStudy.Result r) {
         TextTable t = new TextTable(HEADER);
@@ -76,6 +93,11 @@ public final class GridStudyTables {
         }
         md.append("\n## Metrics against the grid spacing\n\n").append(levels(r).markdown());
         md.append("\n## Grid spacing needed\n\n").append(answers(r).markdown());
+        if (r.range() != null) {
+            md.append("\n## eps* against the grid spacing\n\n").append(r.epsStars().isEmpty()
+                    ? "No metric crossed its tolerance on the analytic field in the scanned range.\n"
+                    : epsStars(r).markdown());
+        }
         AtomicFiles.write(dir.resolve("gridstudy.md"), md.toString());
         StringBuilder csv = new StringBuilder("metric,spacing_m,nodes,grid_value,analytic_value,relative_difference,"
                 + "max_div_b,tolerance,fitted_order,spacing_needed_m,how\n");
@@ -113,6 +135,33 @@ public final class GridStudyTables {
             metrics.add(o);
         }
         doc.put("metrics", metrics);
+        if (r.range() != null) {
+            Map<String, Object> range = new LinkedHashMap<>();
+            range.put("eps_min", r.range().min());
+            range.put("eps_max", r.range().max());
+            range.put("points", r.range().points());
+            doc.put("scan_range", range);
+            List<Map<String, Object>> eps = new ArrayList<>();
+            for (GridStudy.EpsStarRow e : r.epsStars()) {
+                Map<String, Object> o = new LinkedHashMap<>();
+                o.put("metric", e.metric());
+                o.put("scan_tolerance", e.scanTolerance());
+                o.put("eps_star_analytic", e.analytic());
+                List<Map<String, Object>> levels = new ArrayList<>();
+                for (GridStudy.EpsLevel l : e.levels()) {
+                    Map<String, Object> lv = new LinkedHashMap<>();
+                    lv.put("spacing_m", l.spacing());
+                    lv.put("nodes", l.nodes());
+                    lv.put("eps_star", ResultJson.num(l.epsStar()));
+                    lv.put("relative_difference", ResultJson.num(l.relativeDifference()));
+                    levels.add(lv);
+                }
+                o.put("grids", levels);
+                o.put("fitted_order", ResultJson.num(e.order()));
+                eps.add(o);
+            }
+            doc.put("eps_star", eps);
+        }
         AtomicFiles.write(dir.resolve("gridstudy.json"), ResultJson.write(ToolInfo.stamped(doc)));
     }
 
