@@ -19,9 +19,9 @@ import org.twinorbit.harness.gridstudy.GridStudyTables;
  * tokamak the metrics move with the drifts, which are first order in the Jacobian, so each
  * metric's difference from its analytic value must shrink at a fitted order of about 2 or more
  * (asserted: above 1.8), and on the finest grid (h = 1/48 m, R0/72) every metric must agree with
- * the analytic one to 1%. (Where the O(ε²) terms of a metric, which involve second derivatives of
- * B that the interpolant only gets to O(h), dominate the difference, the order drops towards 1:
- * the toroidal field's drift error shows 1.1.) With a scan range, ε* of the dipole on its finest
+ * the analytic one to 1%. (This is not general: the toroidal field's drift error shrinks at order
+ * 1.1, as measured, likely because its O(ε²) part involves second derivatives of B, which the
+ * interpolant gets only to O(h).) With a scan range, ε* of the dipole on its finest
  * axisymmetric grid (h = 5e5 m = L/17) must agree with the analytic ε* to 2%.
  */
 class GridStudyTest {
