@@ -125,11 +125,9 @@ public final class GridStudy {
                 if (range != null) {
                     epsGrids.add(epsStars(scanOf(a, GridFile.PREFIX + file, Map.of(), ra, range, threads), threads));
                 }
-                Files.deleteIfExists(file);
             }
-            Files.deleteIfExists(dir);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot remove the temporary grid files in " + dir, e);
+        } finally {
+            deleteTree(dir);
         }
         List<MetricRow> out = new ArrayList<>();
         for (String m : metrics) {
@@ -187,9 +185,12 @@ public final class GridStudy {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create a temporary folder for a scan", e);
         }
-        org.twinorbit.harness.scan.ScanResult r = b.scan().run(b.evaluator(), dir, false, threads,
-                org.twinorbit.harness.scan.ScanProgress.NONE);
-        deleteTree(dir);
+        org.twinorbit.harness.scan.ScanResult r;
+        try {
+            r = b.scan().run(b.evaluator(), dir, false, threads, org.twinorbit.harness.scan.ScanProgress.NONE);
+        } finally {
+            deleteTree(dir);
+        }
         Map<String, Double> out = new java.util.LinkedHashMap<>();
         for (org.twinorbit.harness.scan.Threshold t : r.thresholds()) {
             if (t.outcome() == org.twinorbit.harness.scan.ThresholdOutcome.CROSSED && Double.isFinite(t.epsStar())) {
