@@ -27,6 +27,10 @@ public final class FieldsCommand implements Runnable {
     @Option(names = "--json", description = "Print the listing as JSON.")
     boolean json;
 
+    @Option(names = "--grid-file", paramLabel = "FILE", description = "Describe this grid file instead of the library: "
+            + "its grid, L, domain, invariants and the largest |div B| L/|B| of its interpolant over the cell centres.")
+    java.nio.file.Path gridFile;
+
     @Spec
     CommandSpec spec;
 
@@ -34,8 +38,12 @@ public final class FieldsCommand implements Runnable {
     public void run() {
         PrintWriter out = spec.commandLine().getOut();
         List<Map<String, Object>> rows = new ArrayList<>();
-        for (FieldProvider p : Fields.all()) {
-            rows.add(describe(p));
+        if (gridFile != null) {
+            rows.add(describe(org.twinorbit.fields.GridFile.read(gridFile)));
+        } else {
+            for (FieldProvider p : Fields.all()) {
+                rows.add(describe(p));
+            }
         }
         if (json) {
             Map<String, Object> doc = new LinkedHashMap<>();
@@ -76,6 +84,21 @@ public final class FieldsCommand implements Runnable {
         return r;
     }
 
+    /** The facts listed for a grid file. */
+    static Map<String, Object> describe(org.twinorbit.fields.GriddedField g) {
+        Map<String, Object> r = new LinkedHashMap<>();
+        r.put("name", g.name());
+        r.put("description", g.gridSummary());
+        r.put("parameters", List.of());
+        r.put("length_meaning", g.lengthMeaning());
+        r.put("l_m", g.length());
+        r.put("domain", g.domainMeaning());
+        r.put("invariants", g.hasElectricField() ? "energy (W = kinetic + q Phi)" : "energy");
+        r.put("geometry", g.geometry().key());
+        r.put("max_div_b", g.maxDivergence());
+        return r;
+    }
+
     @SuppressWarnings("unchecked")
     private static void printText(PrintWriter out, Map<String, Object> r) {
         out.printf("%s — %s%n", r.get("name"), r.get("description"));
@@ -89,6 +112,10 @@ public final class FieldsCommand implements Runnable {
             out.printf("    time scale for a proton: %s s%n", Format.number((double) r.get("time_scale_s_for_proton")));
         }
         out.printf("    domain: %s%n", r.get("domain"));
+        if (r.containsKey("max_div_b")) {
+            out.printf("    max |div B| L/|B| of the interpolant over the cell centres: %s%n",
+                    Format.number((double) r.get("max_div_b")));
+        }
         out.printf("    invariants: %s%n%n", r.get("invariants"));
     }
 }

@@ -10,7 +10,7 @@ final class OutputDirectory {
     private OutputDirectory() {}
 
     /** @throws BadInputException naming the option when the directory cannot be made or written */
-    static Path prepare(Path dir) {
+    public static Path prepare(Path dir) {
         if (dir.toString().isBlank()) {
             throw new BadInputException("--out: give a directory (an empty --out= would write into the current one)");
         }

@@ -78,4 +78,16 @@ class ReadmeExcerptTest {
         assertFalse(Arrays.asList(shown.split("\\s{2,}")).contains("not ok"), shown);
         assertEquals(heading.get(0), shown.split("\\s+")[0]);
     }
+
+    @Test
+    void theGridStudyHeadingsAreTheOnesTheCodePrints() throws IOException {
+        List<String> lines = readme().stream().map(String::trim).toList();
+        for (List<String> heading : List.of(org.twinorbit.harness.gridstudy.GridStudyTables.HEADER,
+                org.twinorbit.harness.gridstudy.GridStudyTables.ANSWER_HEADER,
+                org.twinorbit.harness.gridstudy.GridStudyTables.EPS_HEADER)) {
+            String shown = lines.stream().filter(l -> l.startsWith("metric ") && l.contains(heading.get(1)))
+                    .findFirst().orElseThrow(() -> new AssertionError("README shows no table headed " + heading));
+            assertEquals(heading, Arrays.asList(shown.split("\\s{2,}")), shown);
+        }
+    }
 }

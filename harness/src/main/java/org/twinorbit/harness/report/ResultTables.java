@@ -105,6 +105,9 @@ public final class ResultTables {
                         + "gyration with that orbit's exact invariants (gc-start matched)"
                 : "model row: every gyrophase against one shared zeroth-order guiding center, offsets O(eps) per phase "
                         + "(gc-start shared)");
+        if (rc.field() instanceof org.twinorbit.fields.GriddedField g) {
+            l.add("field on the " + g.gridSummary() + "; " + g.divergenceSummary());
+        }
         for (ResultRow row : r.rows()) {
             if (row.errorKind().equals("model") && row.muJumpFrom() != null) {
                 l.add("mu jump compares: " + row.muJumpFrom());
