@@ -8,8 +8,10 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -46,14 +48,20 @@ class MatchedStartScalingTest {
     private record Fit(double worst, double spread, double[] worstValues) {}
 
     private static Fit fit(String field, double pitch, String start, String metric, String gcStart, boolean bounces) {
-        return fit(EPS, field, pitch, start, metric, gcStart, bounces);
+        return fits(EPS, field, pitch, start, gcStart, bounces, metric).get(metric);
     }
 
-    private static Fit fit(double[] eps, String field, double pitch, String start, String metric, String gcStart,
-                           boolean bounces) {
-        SimpleRegression w = new SimpleRegression();
-        SimpleRegression sd = new SimpleRegression();
-        double[] values = new double[eps.length];
+    /** One run per ε, every named metric fitted from the same runs. */
+    private static Map<String, Fit> fits(double[] eps, String field, double pitch, String start, String gcStart,
+                                         boolean bounces, String... metrics) {
+        Map<String, SimpleRegression> w = new LinkedHashMap<>();
+        Map<String, SimpleRegression> sd = new LinkedHashMap<>();
+        Map<String, double[]> values = new LinkedHashMap<>();
+        for (String metric : metrics) {
+            w.put(metric, new SimpleRegression());
+            sd.put(metric, new SimpleRegression());
+            values.put(metric, new double[eps.length]);
+        }
         for (int i = 0; i < eps.length; i++) {
             CaseSpec s = TestCases.spec(field, "none", "none");
             s.eps = eps[i];
@@ -65,12 +73,20 @@ class MatchedStartScalingTest {
             if (!start.isEmpty()) {
                 s.start = Arrays.stream(start.split(";")).map(Double::valueOf).toList();
             }
-            Stat st = TestCases.row(TestCases.run(s), "gc-reference").metric(metric);
-            values[i] = st.worst();
-            w.addData(Math.log(eps[i]), Math.log(Math.abs(st.worst())));
-            sd.addData(Math.log(eps[i]), Math.log(Math.sqrt(Math.max(0, st.rms() * st.rms() - st.mean() * st.mean()))));
+            ResultRow row = TestCases.row(TestCases.run(s), "gc-reference");
+            for (String metric : metrics) {
+                Stat st = row.metric(metric);
+                values.get(metric)[i] = st.worst();
+                w.get(metric).addData(Math.log(eps[i]), Math.log(Math.abs(st.worst())));
+                sd.get(metric).addData(Math.log(eps[i]),
+                        Math.log(Math.sqrt(Math.max(0, st.rms() * st.rms() - st.mean() * st.mean()))));
+            }
         }
-        return new Fit(w.getSlope(), sd.getSlope(), values);
+        Map<String, Fit> out = new LinkedHashMap<>();
+        for (String metric : metrics) {
+            out.put(metric, new Fit(w.get(metric).getSlope(), sd.get(metric).getSlope(), values.get(metric)));
+        }
+        return out;
     }
 
     private static void record(String field, double pitch, String start, String metric, Fit matched, Fit shared)
@@ -130,22 +146,49 @@ class MatchedStartScalingTest {
     }
 
     /**
-     * In the tokamak a 80° proton is trapped (a banana) only up to ε ≈ 0.02 at the default start,
-     * so the fit runs over ε = 0.005–0.02. Field lines twist there (b·∇×b ≠ 0), which is where a
-     * plain gyration average of v·b and μ is off by O(ε) (the Baños term; Baños, J. Plasma Phys.
-     * 1, 1967): this case fails (slope 1.1) unless p∥ comes from the exact p_φ and μ from the
-     * exact energy, as {@link MatchedStart} does. The shared start is reported, not asserted: in
-     * this short range its slopes lie between 1.2 and 1.8. At 75° the drift error is not asserted
-     * either: it has a floor of ~1e-4 at the smallest ε (fit slope 1.33; see results/README.md).
+     * In the tokamak a 80° or 75° proton is trapped (a banana) only up to ε ≈ 0.02 at the default
+     * start. Field lines twist there (b·∇×b ≠ 0) and ψ curves across b, which is where the
+     * particle's exact p_φ differs from its guiding center's at first order (the μ terms of
+     * {@link MatchedStart#gyroCorrection}); without them the drift error kept an O(ε) part (at 75°
+     * 4.5e-5, 7.6e-5, 1.1e-4 at ε = 0.00125, 0.0025, 0.005: slope 0.6) and so did the mirror
+     * field, which tests μ directly (B at the mirror point = energy/μ; slope 1.0).
+     *
+     * <p>The drift and mirror field are fitted over ε = 0.00125–0.005: the tokamak's expansion
+     * parameter for the orbit's shape is the poloidal gyroradius over the minor radius,
+     * ρ_θ/r = ρ q R/r² ≈ 70 ε at this start, so above ε ≈ 0.005 terms of higher order in it bend
+     * the fit (measured: the drift slope over 0.005–0.02 is 1.1 at 75° and 1.5 at 80° with the
+     * default q, 1.7 at 75° with q halved; the bend moves with q as ρ_θ does). The drift over
+     * 0.005–0.02 is recorded, not asserted. The bounce period is fitted over 0.005–0.02. The
+     * shared start is reported, not asserted.
      */
-    @ParameterizedTest(name = "tokamak pitch {0} {1}")
-    @CsvSource({"80, drift_error", "80, bounce_period_error", "75, bounce_period_error"})
-    void tokamakModelErrorIsSecondOrder(double pitch, String metric) throws IOException {
-        double[] eps = {0.005, 0.01, 0.02};
-        Fit matched = fit(eps, "tokamak", pitch, "", metric, "matched", true);
-        Fit shared = fit(eps, "tokamak", pitch, "", metric, "shared", true);
-        record("tokamak", pitch, "", metric, matched, shared);
-        assertTrue(matched.worst() >= 1.8, "tokamak " + metric + " matched-start slope " + matched.worst());
-        assertTrue(matched.spread() >= 1.8, "tokamak " + metric + " matched-start spread slope " + matched.spread());
+    @ParameterizedTest(name = "tokamak pitch {0}")
+    @CsvSource({"80", "75"})
+    void tokamakModelErrorIsSecondOrder(double pitch) throws IOException {
+        double[] small = {0.00125, 0.0025, 0.005};
+        double[] banana = {0.005, 0.01, 0.02};
+        String[] smallMetrics = {"drift_error", "mirror_field_error"};
+        String[] bananaMetrics = {"bounce_period_error", "drift_error"};
+        Map<String, Fit> matchedSmall = fits(small, "tokamak", pitch, "", "matched", true, smallMetrics);
+        Map<String, Fit> sharedSmall = fits(small, "tokamak", pitch, "", "shared", true, smallMetrics);
+        Map<String, Fit> matchedBanana = fits(banana, "tokamak", pitch, "", "matched", true, bananaMetrics);
+        Map<String, Fit> sharedBanana = fits(banana, "tokamak", pitch, "", "shared", true, bananaMetrics);
+        for (String metric : smallMetrics) {
+            record("tokamak", pitch, "", metric + ", eps 0.00125 0.0025 0.005", matchedSmall.get(metric),
+                    sharedSmall.get(metric));
+        }
+        for (String metric : bananaMetrics) {
+            String label = metric.equals("drift_error") ? metric + " (not asserted)" : metric;
+            record("tokamak", pitch, "", label + ", eps 0.005 0.01 0.02", matchedBanana.get(metric),
+                    sharedBanana.get(metric));
+        }
+        for (String metric : smallMetrics) {
+            assertSecondOrder("tokamak " + metric, matchedSmall.get(metric));
+        }
+        assertSecondOrder("tokamak bounce_period_error", matchedBanana.get("bounce_period_error"));
+    }
+
+    private static void assertSecondOrder(String what, Fit matched) {
+        assertTrue(matched.worst() >= 1.8, what + " matched-start slope " + matched.worst());
+        assertTrue(matched.spread() >= 1.8, what + " matched-start spread slope " + matched.spread());
     }
 }
