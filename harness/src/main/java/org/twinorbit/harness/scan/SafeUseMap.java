@@ -135,6 +135,14 @@ public final class SafeUseMap {
         return result;
     }
 
+    /** The files of a finished map, as the messages about them name them. */
+    public static final String FINISHED_FILES = "safe-use.json, safe-use.csv, safe-use.md, safe-use.png";
+
+    /** True when {@code out} holds a finished map (safe-use.json) and no partial scans. */
+    public static boolean finishedIn(Path out) {
+        return Files.exists(out.resolve("safe-use.json")) && !Files.exists(out.resolve(WORK_DIR));
+    }
+
     /** Writes safe-use.md, .csv, .json and .png into {@code out}, each atomically. */
     public static void write(Result r, Path out) {
         AtomicFiles.write(out.resolve("safe-use.md"), markdown(r));

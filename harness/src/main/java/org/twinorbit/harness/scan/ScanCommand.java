@@ -156,6 +156,13 @@ public final class ScanCommand implements Runnable {
         }
         ScanRequest.Built setup = setup();
         prepareOut();
+        if (resume && setup.scan().finishedIn(out)) {
+            PrintWriter w = spec.commandLine().getOut();
+            w.printf("--resume: %s holds this scan finished (%s) and no partial results: nothing to resume; "
+                    + "drop --resume to compute it again%n", out, BreakdownScan.FINISHED_FILES);
+            w.flush();
+            return;
+        }
         long t0 = System.nanoTime();
         ScanResult r;
         if (execution.quiet()) {
@@ -190,6 +197,13 @@ public final class ScanCommand implements Runnable {
                     + points + " and " + phases);
         }
         prepareOut();
+        if (resume && SafeUseMap.finishedIn(out)) {
+            PrintWriter w = spec.commandLine().getOut();
+            w.printf("--resume: %s holds a finished safe-use map (%s) and no partial scans: nothing to resume; "
+                    + "drop --resume to compute it again%n", out, SafeUseMap.FINISHED_FILES);
+            w.flush();
+            return;
+        }
         long t0 = System.nanoTime();
         SafeUseMap.Resolution res = new SafeUseMap.Resolution(points, phases);
         SafeUseMap.Result r;
