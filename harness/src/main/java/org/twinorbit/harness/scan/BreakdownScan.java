@@ -43,10 +43,15 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
     public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
         ScanCheckpoint cp = ScanCheckpoint.open(out, this, resume);
         List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, pointThreads, progress);
-        ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
+        ScanResult r = result(points);
         ScanOutputs.write(r, out);
         cp.delete();
         return r;
+    }
+
+    /** The finished scan of these points (all of them, pitch-major then increasing ε): ε* found. */
+    ScanResult result(List<ScanPoint> points) {
+        return new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
     }
 
     /** The files of a finished scan, as the messages about them name them. */

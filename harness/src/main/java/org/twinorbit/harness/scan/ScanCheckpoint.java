@@ -132,7 +132,7 @@ public final class ScanCheckpoint {
         root.put("scan", settings);
         List<Object> points = new ArrayList<>();
         for (ScanPoint q : done.values()) {
-            points.add(ScanJson.pointMap(q));
+            points.add(ScanJson.pointMap(q, true));
         }
         root.put("points", points);
         AtomicFiles.write(file, ScanJson.write(root));

@@ -142,6 +142,12 @@ public final class ScanCommand implements Runnable {
     @Option(names = "--resume", description = "Take up the points saved by an interrupted scan with the same options in --out.")
     boolean resume;
 
+    @Option(names = "--shard", paramLabel = "I/K",
+            description = "Compute only part I (counted from 0) of K parts of nearly equal estimated cost, as one task "
+                    + "of a job array, into --out/shard-I-of-K; 'twinorbit merge --out DIR' joins the K parts into the "
+                    + "files a single run writes. With --resume a shard takes up its own saved points.")
+    String shard;
+
     @Mixin
     ExecutionOptions execution;
 
@@ -155,7 +161,13 @@ public final class ScanCommand implements Runnable {
             return;
         }
         ScanRequest.Built setup = setup();
+        Shard part = shard == null ? null : Shard.parse(shard);
         prepareOut();
+        if (part != null) {
+            runShard(part, () -> ShardRuns.scan(setup, recordedOptions(), part, out, resume, threads(), ScanProgress.NONE),
+                    bar -> ShardRuns.scan(setup, recordedOptions(), part, out, resume, threads(), bar), "scan " + field);
+            return;
+        }
         if (resume && setup.scan().finishedIn(out)) {
             PrintWriter w = spec.commandLine().getOut();
             w.printf("--resume: %s holds this scan finished (%s) and no partial results: nothing to resume; "
@@ -196,7 +208,14 @@ public final class ScanCommand implements Runnable {
             throw new IllegalArgumentException("--safe-use needs --points >= 2 and --phases in [1, 1024], got "
                     + points + " and " + phases);
         }
+        Shard part = shard == null ? null : Shard.parse(shard);
         prepareOut();
+        if (part != null) {
+            SafeUseMap.Plan plan = SafeUseMap.plan(new SafeUseMap.Resolution(points, phases), threads);
+            runShard(part, () -> ShardRuns.safeUse(plan, recordedOptions(), part, out, resume, threads, ScanProgress.NONE),
+                    bar -> ShardRuns.safeUse(plan, recordedOptions(), part, out, resume, threads, bar), "safe-use map");
+            return;
+        }
         if (resume && SafeUseMap.finishedIn(out)) {
             PrintWriter w = spec.commandLine().getOut();
             w.printf("--resume: %s holds a finished safe-use map (%s) and no partial scans: nothing to resume; "
@@ -221,6 +240,66 @@ public final class ScanCommand implements Runnable {
         w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png; %s (%s)%n", out, total,
                 Timings.FILE_NAME);
         w.flush();
+    }
+
+    /**
+     * Runs one shard, quietly or with a progress bar; a finished shard under --resume is left as it is.
+     *
+     * @return nothing; prints where the shard's results are
+     */
+    private void runShard(Shard part, java.util.function.Supplier<Path> quiet,
+                          java.util.function.Function<ScanProgress, Path> shown, String label) {
+        PrintWriter w = spec.commandLine().getOut();
+        if (resume && ShardRuns.finished(out, part)) {
+            w.printf("--resume: shard %d/%d in %s is finished (%s): nothing to resume%n", part.index(), part.count(),
+                    out.resolve(part.folder()), ShardFile.FILE_NAME);
+            w.flush();
+            return;
+        }
+        long t0 = System.nanoTime();
+        Path folder;
+        if (execution.quiet()) {
+            folder = quiet.get();
+        } else {
+            try (ScanProgressBar bar = new ScanProgressBar(label + ", shard " + part.index() + "/" + part.count())) {
+                folder = shown.apply(bar);
+            }
+        }
+        String total = String.format(java.util.Locale.ROOT, "shard %d/%d in %.1f s", part.index(), part.count(),
+                (System.nanoTime() - t0) * 1e-9);
+        new Timings("twinorbit scan --shard " + part.index() + "/" + part.count()).total(total).write(folder);
+        w.printf("wrote %s/%s; %s (%s); when every shard is done: twinorbit merge --out %s%n", folder,
+                ShardFile.FILE_NAME, total, Timings.FILE_NAME, out);
+        w.flush();
+    }
+
+    /** Options that do not change any result: left out of what shards record and compare. */
+    private static final java.util.Set<String> NOT_RECORDED = java.util.Set.of("--shard", "--out", "--resume",
+            "--threads", "--quiet", "--help", "--version");
+
+    /**
+     * The options as given that can change a result, sorted by option name (a repeated option
+     * keeps its order), so that shards run with the same options in another order agree.
+     */
+    List<String> recordedOptions() {
+        List<picocli.CommandLine.Model.OptionSpec> matched = new ArrayList<>(spec.commandLine().getParseResult()
+                .matchedOptions());
+        matched.sort(java.util.Comparator.comparing(picocli.CommandLine.Model.OptionSpec::longestName));
+        List<String> args = new ArrayList<>();
+        for (picocli.CommandLine.Model.OptionSpec o : matched) {
+            if (NOT_RECORDED.contains(o.longestName())) {
+                continue;
+            }
+            if (o.arity().max() == 0) {
+                args.add(o.longestName());
+                continue;
+            }
+            for (String v : o.originalStringValues()) {
+                args.add(o.longestName());
+                args.add(v);
+            }
+        }
+        return args;
     }
 
     /** Makes --out, after every other option has been checked and before any orbit runs. */
@@ -309,7 +388,7 @@ public final class ScanCommand implements Runnable {
         return tol;
     }
 
-    private static void printSummary(PrintWriter w, ScanResult r) {
+    static void printSummary(PrintWriter w, ScanResult r) {
         for (Threshold t : r.thresholds()) {
             String at = t.outcome().hasEpsStar()
                     ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())

@@ -83,14 +83,24 @@ public final class ScanJson {
         }
     }
 
-    /** One point as an ordered map ready for Jackson. */
+    /** One point as an ordered map ready for Jackson, counts rounded as scan.json has them. */
     static Map<String, Object> pointMap(ScanPoint p) {
+        return pointMap(p, false);
+    }
+
+    /**
+     * One point as an ordered map, every value exact when {@code exact}: the form of the partial
+     * and shard files, read back into the very values an uninterrupted run holds (a count that is
+     * a mean over the phases, such as 7974.5, would otherwise come back rounded and print
+     * differently in scan.md).
+     */
+    static Map<String, Object> pointMap(ScanPoint p, boolean exact) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("eps", p.eps());
         m.put("energy_ev", p.energyEv());
         m.put("pitch_deg", p.pitchDeg());
         for (Map.Entry<String, Double> e : p.values().entrySet()) {
-            m.put(e.getKey(), COUNTS.contains(e.getKey()) ? count(e.getValue()) : number(e.getValue()));
+            m.put(e.getKey(), COUNTS.contains(e.getKey()) && !exact ? count(e.getValue()) : number(e.getValue()));
         }
         return m;
     }
