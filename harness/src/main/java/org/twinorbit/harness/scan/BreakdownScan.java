@@ -1,5 +1,7 @@
 package org.twinorbit.harness.scan;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -65,11 +67,11 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
      *         (resuming would overwrite it with another scan)
      */
     public boolean finishedIn(Path out) {
-        java.nio.file.Path json = out.resolve("scan.json");
-        if (!java.nio.file.Files.exists(json) || java.nio.file.Files.exists(out.resolve(ScanCheckpoint.FILE_NAME))) {
+        Path json = out.resolve("scan.json");
+        if (!Files.exists(json) || Files.exists(out.resolve(ScanCheckpoint.FILE_NAME))) {
             return false;
         }
-        com.fasterxml.jackson.databind.JsonNode saved = ScanJson.readFile(json, "--resume: the finished results").get("scan");
+        JsonNode saved = ScanJson.readFile(json, "--resume: the finished results").get("scan");
         if (saved == null || !saved.equals(ScanJson.MAPPER.valueToTree(settings))) {
             throw new IllegalArgumentException("--resume: " + out + " holds a finished scan made with different settings ("
                     + FINISHED_FILES + "; saved: " + saved + "); use another --out, or drop --resume to replace it");
