@@ -117,13 +117,13 @@ public final class SafeUseMap {
      * @param names   each scan's name ({@code <field>-<species>}), also its work folder
      * @param skipped fields without a scan, and why
      */
-    record Plan(List<ScanRequest.Built> scans, List<String> names, Map<String, String> skipped) {
+    public record Plan(List<ScanRequest.Built> scans, List<String> names, Map<String, String> skipped) {
         int totalPoints() {
             return scans.stream().mapToInt(b -> b.scan().eps().length * b.scan().pitches().size()).sum();
         }
     }
 
-    static Plan plan(Resolution res, int threads) {
+    public static Plan plan(Resolution res, int threads) {
         List<ScanRequest.Built> scans = new ArrayList<>();
         List<String> names = new ArrayList<>();
         Map<String, String> skipped = new LinkedHashMap<>();
@@ -351,7 +351,7 @@ public final class SafeUseMap {
         return some;
     }
 
-    static void deleteTree(Path dir) {
+    public static void deleteTree(Path dir) {
         if (!Files.exists(dir)) {
             return;
         }

@@ -273,33 +273,9 @@ public final class ScanCommand implements Runnable {
         w.flush();
     }
 
-    /** Options that do not change any result: left out of what shards record and compare. */
-    private static final java.util.Set<String> NOT_RECORDED = java.util.Set.of("--shard", "--out", "--resume",
-            "--threads", "--quiet", "--help", "--version");
-
-    /**
-     * The options as given that can change a result, sorted by option name (a repeated option
-     * keeps its order), so that shards run with the same options in another order agree.
-     */
+    /** The options as given that can change a result ({@link RecordedOptions}). */
     List<String> recordedOptions() {
-        List<picocli.CommandLine.Model.OptionSpec> matched = new ArrayList<>(spec.commandLine().getParseResult()
-                .matchedOptions());
-        matched.sort(java.util.Comparator.comparing(picocli.CommandLine.Model.OptionSpec::longestName));
-        List<String> args = new ArrayList<>();
-        for (picocli.CommandLine.Model.OptionSpec o : matched) {
-            if (NOT_RECORDED.contains(o.longestName())) {
-                continue;
-            }
-            if (o.arity().max() == 0) {
-                args.add(o.longestName());
-                continue;
-            }
-            for (String v : o.originalStringValues()) {
-                args.add(o.longestName());
-                args.add(v);
-            }
-        }
-        return args;
+        return RecordedOptions.of(spec);
     }
 
     /** Makes --out, after every other option has been checked and before any orbit runs. */
@@ -388,7 +364,7 @@ public final class ScanCommand implements Runnable {
         return tol;
     }
 
-    static void printSummary(PrintWriter w, ScanResult r) {
+    public static void printSummary(PrintWriter w, ScanResult r) {
         for (Threshold t : r.thresholds()) {
             String at = t.outcome().hasEpsStar()
                     ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())

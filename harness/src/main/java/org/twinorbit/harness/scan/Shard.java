@@ -45,7 +45,7 @@ public record Shard(int index, int count) {
     }
 
     /** The shard a folder name stands for, or null when the name is not a shard folder's. */
-    static Shard ofFolder(String name) {
+    public static Shard ofFolder(String name) {
         Matcher m = FOLDER.matcher(name);
         if (!m.matches()) {
             return null;
@@ -69,7 +69,7 @@ public record Shard(int index, int count) {
      * @param count how many parts
      * @return the part of each unit, 0 ≤ part &lt; count
      */
-    static int[] cut(double[] costs, int count) {
+    public static int[] cut(double[] costs, int count) {
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < costs.length; i++) {
             order.add(i);

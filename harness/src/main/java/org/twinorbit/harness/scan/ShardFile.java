@@ -33,10 +33,10 @@ import org.twinorbit.harness.report.ToolInfo;
  * @param options the result-relevant options
  * @param scans   the shard's part of each scan
  */
-record ShardFile(Map<String, Object> tool, Shard shard, String command, List<String> options, List<Part> scans) {
+public record ShardFile(Map<String, Object> tool, Shard shard, String command, List<String> options, List<Part> scans) {
 
     /** Name of the file in a shard's folder. */
-    static final String FILE_NAME = "shard.json";
+    public static final String FILE_NAME = "shard.json";
 
     /**
      * One scan's part of a shard.
@@ -46,9 +46,9 @@ record ShardFile(Map<String, Object> tool, Shard shard, String command, List<Str
      * @param points   the shard's points of this scan, pitch-major then increasing ε
      * @param failed   null, or why the scan could not run
      */
-    record Part(String name, Map<String, Object> settings, List<ScanPoint> points, String failed) {}
+    public record Part(String name, Map<String, Object> settings, List<ScanPoint> points, String failed) {}
 
-    void write(Path folder) {
+    public void write(Path folder) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("tool", tool);
         Map<String, Object> s = new LinkedHashMap<>();
@@ -76,7 +76,7 @@ record ShardFile(Map<String, Object> tool, Shard shard, String command, List<Str
      * @throws IllegalArgumentException naming the file and what is wrong with it
      */
     @SuppressWarnings("unchecked")
-    static ShardFile read(Path file) {
+    public static ShardFile read(Path file) {
         JsonNode root = ScanJson.readFile(file, "merge: the shard results");
         try {
             Map<String, Object> tool = ScanJson.MAPPER.convertValue(need(root, "tool", JsonNode::isObject), Map.class);

@@ -25,14 +25,45 @@ import picocli.CommandLine;
  * counts or builds, missing, unfinished or duplicated shards, so a finished result is never
  * replaced by a partial one.
  */
-final class ShardMerge {
+public final class ShardMerge {
 
     private ShardMerge() {}
 
     /** What a merge wrote. */
-    record Merged(String command, int shards, List<String> files, ScanResult scan) {}
+    public record Merged(String command, int shards, List<String> files, ScanResult scan) {}
 
-    static Merged merge(Path out) {
+    /**
+     * Merges the scan or safe-use map whose shards {@code out} holds.
+     *
+     * @throws IllegalArgumentException when the shards are not a suite's but do not fit (see {@link #collect})
+     */
+    public static Merged merge(Path out) {
+        return merge(out, collect(out));
+    }
+
+    /**
+     * Merges a scan's or safe-use map's checked shards ({@link #collect}).
+     *
+     * @throws IllegalArgumentException naming the command when the shards are of another
+     */
+    public static Merged merge(Path out, Map<Integer, ShardFile> files) {
+        ShardFile first = files.get(0);
+        return switch (first.command()) {
+            case "scan" -> mergeScan(out, files);
+            case "safe-use" -> mergeSafeUse(out, files);
+            default -> throw new IllegalArgumentException("merge: shard 0 names the command '" + first.command()
+                    + "'; shards come from scan, scan --safe-use or suite");
+        };
+    }
+
+    /**
+     * The finished shard files under {@code out}, by shard index, after every check that needs no
+     * knowledge of the command: one cut, every shard present once and finished, the same build
+     * (this one) and the same options everywhere.
+     *
+     * @throws IllegalArgumentException naming each problem; nothing is written
+     */
+    public static Map<Integer, ShardFile> collect(Path out) {
         if (!Files.isDirectory(out)) {
             throw new IllegalArgumentException("--out: " + out + " is not a directory holding shard folders");
         }
@@ -107,12 +138,7 @@ final class ShardMerge {
                     + ", this is " + describe(ToolInfo.json()) + "; merge with the build that ran them, so that the "
                     + "results name the build that computed them");
         }
-        return switch (first.command()) {
-            case "scan" -> mergeScan(out, files);
-            case "safe-use" -> mergeSafeUse(out, files);
-            default -> throw new IllegalArgumentException("merge: shard 0 names the command '" + first.command()
-                    + "'; shards come from scan or scan --safe-use");
-        };
+        return files;
     }
 
     private static Merged mergeScan(Path out, Map<Integer, ShardFile> files) {
@@ -139,6 +165,18 @@ final class ShardMerge {
     private static Merged mergeSafeUse(Path out, Map<Integer, ShardFile> files) {
         ScanCommand cmd = rebuild(files.get(0));
         SafeUseMap.Plan plan = SafeUseMap.plan(new SafeUseMap.Resolution(cmd.points, cmd.phases), 1);
+        SafeUseMap.write(safeUse(plan, files), out);
+        return new Merged("safe-use", files.size(), List.of("safe-use.md", "safe-use.csv", "safe-use.json",
+                "safe-use.png"), null);
+    }
+
+    /**
+     * The safe-use map of {@code plan} from the points the shards hold, as a single run finds it.
+     *
+     * @throws IllegalArgumentException when a point is missing, duplicated or off the grid, or a
+     *                                  shard ran a scan with other settings
+     */
+    public static SafeUseMap.Result safeUse(SafeUseMap.Plan plan, Map<Integer, ShardFile> files) {
         Map<String, String> skipped = new LinkedHashMap<>(plan.skipped());
         List<SafeUseMap.Row> rows = new ArrayList<>();
         for (int i = 0; i < plan.scans().size(); i++) {
@@ -150,9 +188,7 @@ final class ShardMerge {
             }
             rows.addAll(SafeUseMap.rows(b, b.scan().result(j.points())));
         }
-        SafeUseMap.write(new SafeUseMap.Result(rows, skipped), out);
-        return new Merged("safe-use", files.size(), List.of("safe-use.md", "safe-use.csv", "safe-use.json",
-                "safe-use.png"), null);
+        return new SafeUseMap.Result(rows, skipped);
     }
 
     /** The scan command as the shards ran it, options parsed by this build. */

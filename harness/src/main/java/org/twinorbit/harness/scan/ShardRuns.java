@@ -13,7 +13,7 @@ import org.twinorbit.harness.report.ToolInfo;
  * each saved as it completes (so an interrupted shard resumes like {@code scan --resume}), then
  * {@link ShardFile} in the shard's own folder. Nothing outside that folder is written.
  */
-final class ShardRuns {
+public final class ShardRuns {
 
     private ShardRuns() {}
 
@@ -43,6 +43,15 @@ final class ShardRuns {
     static Path safeUse(SafeUseMap.Plan plan, List<String> options, Shard shard, Path out, boolean resume, int threads,
                         ScanProgress progress) {
         Path folder = out.resolve(shard.folder());
+        int[] part = Shard.cut(safeUseCosts(plan), shard.count());
+        List<ShardFile.Part> parts = safeUseParts(plan, part, 0, shard, folder, resume, threads, progress);
+        new ShardFile(ToolInfo.json(), shard, "safe-use", options, parts).write(folder);
+        deleteSafeUseWork(plan, folder);
+        return folder;
+    }
+
+    /** The estimated cost ({@link PointCost}) of every point of the map, scan after scan in the plan's order. */
+    public static double[] safeUseCosts(SafeUseMap.Plan plan) {
         List<double[]> costs = new ArrayList<>();
         int n = 0;
         for (ScanRequest.Built b : plan.scans()) {
@@ -56,25 +65,41 @@ final class ShardRuns {
             System.arraycopy(c, 0, all, at, c.length);
             at += c.length;
         }
-        int[] part = Shard.cut(all, shard.count());
+        return all;
+    }
+
+    /**
+     * A shard's points of the safe-use map, each scan checkpointed in {@code folder}/&lt;scan name&gt;
+     * (so that {@code resume} takes them up).
+     *
+     * @param part   the shard of every unit of the whole cut
+     * @param offset index in {@code part} of the map's first point ({@link #safeUseCosts} order)
+     * @return the shard's part of each scan, in the plan's order
+     */
+    public static List<ShardFile.Part> safeUseParts(SafeUseMap.Plan plan, int[] part, int offset, Shard shard,
+                                                    Path folder, boolean resume, int threads, ScanProgress progress) {
         int mine = 0;
-        for (int p : part) {
-            mine += p == shard.index() ? 1 : 0;
+        int total = plan.totalPoints();
+        for (int k = 0; k < total; k++) {
+            mine += part[offset + k] == shard.index() ? 1 : 0;
         }
         ScanProgress overall = new SafeUseMap.Overall(progress, mine);
         List<ShardFile.Part> parts = new ArrayList<>();
-        at = 0;
+        int at = offset;
         for (int i = 0; i < plan.scans().size(); i++) {
             ScanRequest.Built b = plan.scans().get(i);
             String name = plan.names().get(i);
             parts.add(part(b, name, folder.resolve(name), part, at, shard, resume, threads, overall, true));
-            at += costs.get(i).length;
+            at += b.scan().eps().length * b.scan().pitches().size();
         }
-        new ShardFile(ToolInfo.json(), shard, "safe-use", options, parts).write(folder);
+        return parts;
+    }
+
+    /** Deletes the checkpoints {@link #safeUseParts} left in {@code folder}, once its file is written. */
+    public static void deleteSafeUseWork(SafeUseMap.Plan plan, Path folder) {
         for (String name : plan.names()) {
             SafeUseMap.deleteTree(folder.resolve(name));
         }
-        return folder;
     }
 
     /**
