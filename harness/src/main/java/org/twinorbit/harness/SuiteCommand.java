@@ -31,7 +31,9 @@ import picocli.CommandLine.Model.CommandSpec;
 /**
  * {@code twinorbit suite}: the built-in validation suite into tables and plots. The files it
  * writes have no wall-clock times, so that regenerating them with an unchanged tool gives the
- * same bytes; the times go to the terminal and to {@link Timings#FILE_NAME} beside them.
+ * same bytes; the times go to the terminal and to {@link Timings#FILE_NAME} beside them. With
+ * {@code --shard I/K} it computes one part into its own folder ({@link SuiteShards}), and
+ * {@link MergeCommand} writes the files from all parts.
  */
 @Command(name = "suite", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Run the built-in validation suite (every field of the library with its cases, every integrator) "
@@ -81,7 +83,7 @@ public final class SuiteCommand implements Callable<Integer> {
             throw new IllegalArgumentException("--resume: only with --shard I/K (a suite shard takes up its saved cases "
                     + "and points); a whole suite runs from the start");
         }
-        List<Case> cases = ValidationSuite.cases(quick, pushers == null ? Registry.pusherNames() : checked(pushers));
+        List<Case> cases = cases(this);
         OutputDirectory.prepare(out);
         if (part != null) {
             return runShard(part, cases, threads);
@@ -95,7 +97,7 @@ public final class SuiteCommand implements Callable<Integer> {
                 threads);
         List<RowVerdict> verdicts = printReport(pw, reports, total, out);
         Timings timings = new Timings("twinorbit suite" + (quick ? " --quick" : "")).total(total).cases(results);
-        if (!quick && !noSafeUse) {
+        if (withSafeUse()) {
             timings.total(writeSafeUseMap(pw, threads));
         }
         timings.write(out);

@@ -16,12 +16,14 @@ import org.twinorbit.harness.report.ToolInfo;
  * <ul>
  * <li>{@code tool}: the build that computed the points ({@link ToolInfo});
  * <li>{@code shard}: {@code index} and {@code count};
- * <li>{@code command}: {@code scan} or {@code safe-use};
+ * <li>{@code command}: {@code scan}, {@code safe-use} or {@code suite} (whose cases are saved
+ *     beside this file, see {@code suite.SuiteShards});
  * <li>{@code options}: the command's options as given, sorted by option name, without those that
  *     do not change a result ({@code --shard}, {@code --out}, {@code --resume}, {@code --threads},
  *     {@code --quiet}); {@code twinorbit merge} rebuilds the scans from them;
  * <li>{@code scans}: one per scan of the command (one for {@code scan}, one per field and species
- *     for the safe-use map), each with {@code name}, {@code scan} (the settings, as in scan.json),
+ *     for the safe-use map, alone or in a full suite; none in a suite without the map), each with
+ *     {@code name}, {@code scan} (the settings, as in scan.json),
  *     {@code points} (the shard's points, as in scan.json but
  *     every value exact, counts included) and {@code failed} (null, or why the
  *     scan could not run).
@@ -29,7 +31,7 @@ import org.twinorbit.harness.report.ToolInfo;
  *
  * @param tool    the build's tool object
  * @param shard   which part
- * @param command {@code scan} or {@code safe-use}
+ * @param command {@code scan}, {@code safe-use} or {@code suite}
  * @param options the result-relevant options
  * @param scans   the shard's part of each scan
  */

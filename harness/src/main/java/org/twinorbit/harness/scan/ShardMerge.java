@@ -35,7 +35,7 @@ public final class ShardMerge {
     /**
      * Merges the scan or safe-use map whose shards {@code out} holds.
      *
-     * @throws IllegalArgumentException when the shards are not a suite's but do not fit (see {@link #collect})
+     * @throws IllegalArgumentException when the shards do not fit (see {@link #collect}) or are a suite's
      */
     public static Merged merge(Path out) {
         return merge(out, collect(out));
