@@ -11,7 +11,13 @@ import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.report.Timings;
 import org.twinorbit.harness.run.CaseRunner;
+import java.nio.file.Files;
+import org.twinorbit.harness.scan.RecordedOptions;
 import org.twinorbit.harness.scan.SafeUseMap;
+import org.twinorbit.harness.scan.Shard;
+import org.twinorbit.harness.scan.ShardFile;
+import org.twinorbit.harness.suite.CaseReport;
+import org.twinorbit.harness.suite.SuiteShards;
 import org.twinorbit.harness.scan.ScanProgress;
 import org.twinorbit.harness.scan.ScanProgressBar;
 import org.twinorbit.harness.suite.ValidationReport;
@@ -25,7 +31,9 @@ import picocli.CommandLine.Model.CommandSpec;
 /**
  * {@code twinorbit suite}: the built-in validation suite into tables and plots. The files it
  * writes have no wall-clock times, so that regenerating them with an unchanged tool gives the
- * same bytes; the times go to the terminal and to {@link Timings#FILE_NAME} beside them.
+ * same bytes; the times go to the terminal and to {@link Timings#FILE_NAME} beside them. With
+ * {@code --shard I/K} it computes one part into its own folder ({@link SuiteShards}), and
+ * {@link MergeCommand} writes the files from all parts.
  */
 @Command(name = "suite", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Run the built-in validation suite (every field of the library with its cases, every integrator) "
@@ -51,6 +59,16 @@ public final class SuiteCommand implements Callable<Integer> {
             description = "Directory of the report (default: ${DEFAULT-VALUE}).")
     Path out;
 
+    @Option(names = "--shard", paramLabel = "I/K",
+            description = "Compute only part I (counted from 0) of K: the cases and safe-use points a cost-balanced cut "
+                    + "gives it, e.g. the task id of a job array, into --out/shard-I-of-K; 'twinorbit merge --out DIR' "
+                    + "joins the K parts into the files one suite run writes, with its verdicts and exit code.")
+    String shard;
+
+    @Option(names = "--resume", description = "With --shard: take up the cases and points an interrupted run of "
+            + "the same shard saved in --out.")
+    boolean resume;
+
     @Mixin
     ExecutionOptions execution;
 
@@ -60,31 +78,85 @@ public final class SuiteCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         int threads = execution.threads();
+        Shard part = shard == null ? null : Shard.parse(shard);
+        if (resume && part == null) {
+            throw new IllegalArgumentException("--resume: only with --shard I/K (a suite shard takes up its saved cases "
+                    + "and points); a whole suite runs from the start");
+        }
+        List<Case> cases = cases(this);
         OutputDirectory.prepare(out);
-        List<Case> cases = ValidationSuite.cases(quick, pushers == null ? Registry.pusherNames() : checked(pushers));
+        if (part != null) {
+            return runShard(part, cases, threads);
+        }
         long t0 = System.nanoTime();
         List<CaseResult> results = new CaseRunner(threads, execution.quiet()).run(cases);
-        ValidationReport.write(results, quick, out, threads);
+        List<CaseReport> reports = ValidationReport.write(results, quick, out, threads);
         double seconds = (System.nanoTime() - t0) * 1e-9;
         PrintWriter pw = spec.commandLine().getOut();
-        pw.print(ValidationReport.overview(results, quick).aligned());
-        pw.println();
         String total = String.format(java.util.Locale.ROOT, "%d cases in %.1f s on %d threads", cases.size(), seconds,
                 threads);
-        pw.printf("%s; wrote %s, validation.csv, validation.json and plots/%n", total, out.resolve("validation.md"));
-        List<RowVerdict> verdicts = ValidationSuite.verdicts(results, quick);
-        for (String line : VerdictReport.lines(verdicts)) {
-            pw.println(line);
-        }
-        pw.flush();
+        List<RowVerdict> verdicts = printReport(pw, reports, total, out);
         Timings timings = new Timings("twinorbit suite" + (quick ? " --quick" : "")).total(total).cases(results);
-        if (!quick && !noSafeUse) {
+        if (withSafeUse()) {
             timings.total(writeSafeUseMap(pw, threads));
         }
         timings.write(out);
         pw.printf("wall times in %s%n", out.resolve(Timings.FILE_NAME));
         pw.flush();
         return VerdictReport.exitCode(verdicts);
+    }
+
+    /**
+     * Prints what a suite run prints of its report: the overview, where the files are, the verdicts.
+     *
+     * @param what how the cases came about ("31 cases in 12.0 s on 2 threads", "merged 3 shards")
+     * @return the verdicts, in report order
+     */
+    static List<RowVerdict> printReport(PrintWriter pw, List<CaseReport> reports, String what, Path out) {
+        pw.print(ValidationReport.overview(reports).aligned());
+        pw.println();
+        pw.printf("%s; wrote %s, validation.csv, validation.json and plots/%n", what, out.resolve("validation.md"));
+        List<RowVerdict> verdicts = ValidationReport.verdicts(reports);
+        for (String line : VerdictReport.lines(verdicts)) {
+            pw.println(line);
+        }
+        pw.flush();
+        return verdicts;
+    }
+
+    /** The cases of the suite the recorded options of a suite shard give, with this class path's pushers. */
+    static List<Case> cases(SuiteCommand recorded) {
+        return ValidationSuite.cases(recorded.quick, recorded.pushers == null ? Registry.pusherNames()
+                : checked(recorded.pushers));
+    }
+
+    /** True when the suite of these options has the safe-use map. */
+    boolean withSafeUse() {
+        return !quick && !noSafeUse;
+    }
+
+    /** Runs one shard; its verdicts are the merge's, so a finished shard exits 0. */
+    private int runShard(Shard part, List<Case> cases, int threads) {
+        PrintWriter pw = spec.commandLine().getOut();
+        Path folder = out.resolve(part.folder());
+        if (resume && Files.exists(folder.resolve(ShardFile.FILE_NAME))) {
+            pw.printf("--resume: shard %d/%d in %s is finished (%s): nothing to resume%n", part.index(), part.count(),
+                    folder, ShardFile.FILE_NAME);
+            pw.flush();
+            return 0;
+        }
+        long t0 = System.nanoTime();
+        SuiteShards.Outcome o = SuiteShards.run(SuiteShards.plan(cases, withSafeUse(), part.count()), quick,
+                RecordedOptions.of(spec), part, out, resume, threads, execution.quiet());
+        String total = String.format(java.util.Locale.ROOT, "shard %d/%d: %d of %d cases%s%s in %.1f s", part.index(),
+                part.count(), o.cases(), cases.size(), o.resumed() > 0 ? " (" + o.resumed() + " resumed)" : "",
+                withSafeUse() ? " and its safe-use points" : "", (System.nanoTime() - t0) * 1e-9);
+        new Timings("twinorbit suite" + (quick ? " --quick" : "") + " --shard " + part.index() + "/" + part.count())
+                .total(total).write(folder);
+        pw.printf("wrote %s/%s; %s (%s); when every shard is done: twinorbit merge --out %s%n", folder,
+                ShardFile.FILE_NAME, total, Timings.FILE_NAME, out);
+        pw.flush();
+        return 0;
     }
 
     /** The names, each checked against the registry. @throws IllegalArgumentException naming --pushers */

@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
             "Runs the same charged particles as full orbits and as guiding centers through the same",
             "fields, and measures how well each integrator and each model keeps the physics."},
         subcommands = {FieldsCommand.class, ProbeCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
-            org.twinorbit.harness.scan.ScanCommand.class, BaselineCommand.class, CheckCommand.class,
+            org.twinorbit.harness.scan.ScanCommand.class, MergeCommand.class, BaselineCommand.class, CheckCommand.class,
             ExportCommand.class, ScoreCommand.class, PrecisionCommand.class, GridCommand.class, GridStudyCommand.class,
             CommandLine.HelpCommand.class})
 public final class TwinorbitCommand implements Runnable {

@@ -1,5 +1,7 @@
 package org.twinorbit.harness.scan;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -41,11 +43,39 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
      *                     time-slicing; the results do not depend on either count
      */
     public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
-        ScanCheckpoint cp = ScanCheckpoint.open(out, settings, resume);
+        ScanCheckpoint cp = ScanCheckpoint.open(out, this, resume);
         List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, pointThreads, progress);
-        ScanResult r = new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
+        ScanResult r = result(points);
         ScanOutputs.write(r, out);
         cp.delete();
         return r;
+    }
+
+    /** The finished scan of these points (all of them, pitch-major then increasing ε): ε* found. */
+    ScanResult result(List<ScanPoint> points) {
+        return new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
+    }
+
+    /** The files of a finished scan, as the messages about them name them. */
+    public static final String FINISHED_FILES = "scan.json, scan.csv, scan.md, scan.png";
+
+    /**
+     * True when {@code out} holds this scan finished (a scan.json with equal settings and no
+     * partial results), so that {@code --resume} has nothing to do.
+     *
+     * @throws IllegalArgumentException when {@code out} holds a finished scan of other settings
+     *         (resuming would overwrite it with another scan)
+     */
+    public boolean finishedIn(Path out) {
+        Path json = out.resolve("scan.json");
+        if (!Files.exists(json) || Files.exists(out.resolve(ScanCheckpoint.FILE_NAME))) {
+            return false;
+        }
+        JsonNode saved = ScanJson.readFile(json, "--resume: the finished results").get("scan");
+        if (saved == null || !saved.equals(ScanJson.MAPPER.valueToTree(settings))) {
+            throw new IllegalArgumentException("--resume: " + out + " holds a finished scan made with different settings ("
+                    + FINISHED_FILES + "; saved: " + saved + "); use another --out, or drop --resume to replace it");
+        }
+        return true;
     }
 }

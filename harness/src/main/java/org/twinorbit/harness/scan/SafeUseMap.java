@@ -87,6 +87,43 @@ public final class SafeUseMap {
      * @param resume take up the scans an interrupted run left in {@code out}
      */
     public static Result run(Path out, Resolution res, boolean resume, int threads, ScanProgress progress) {
+        Plan plan = plan(res, threads);
+        Map<String, String> skipped = new LinkedHashMap<>(plan.skipped());
+        Overall overall = new Overall(progress, plan.totalPoints());
+        Path work = out.resolve(WORK_DIR);
+        List<Row> rows = new ArrayList<>();
+        for (int i = 0; i < plan.scans().size(); i++) {
+            ScanRequest.Built b = plan.scans().get(i);
+            ScanResult r;
+            try {
+                r = b.scan().run(b.evaluator(), work.resolve(plan.names().get(i)), resume, threads, overall);
+            } catch (IllegalArgumentException e) {
+                // one scan that cannot run does not sink the map; it is listed with the reason
+                skipped.put(plan.names().get(i), failure(e));
+                continue;
+            }
+            rows.addAll(rows(b, r));
+        }
+        Result result = new Result(rows, skipped);
+        write(result, out);
+        deleteTree(work);
+        return result;
+    }
+
+    /**
+     * The scans of the map, built and checked, nothing computed.
+     *
+     * @param scans   one per field and species, in the map's order
+     * @param names   each scan's name ({@code <field>-<species>}), also its work folder
+     * @param skipped fields without a scan, and why
+     */
+    public record Plan(List<ScanRequest.Built> scans, List<String> names, Map<String, String> skipped) {
+        int totalPoints() {
+            return scans.stream().mapToInt(b -> b.scan().eps().length * b.scan().pitches().size()).sum();
+        }
+    }
+
+    public static Plan plan(Resolution res, int threads) {
         List<ScanRequest.Built> scans = new ArrayList<>();
         List<String> names = new ArrayList<>();
         Map<String, String> skipped = new LinkedHashMap<>();
@@ -109,30 +146,31 @@ public final class SafeUseMap {
                 names.add(p.name() + "-" + s.name());
             }
         }
-        int total = scans.stream().mapToInt(b -> b.scan().eps().length * b.scan().pitches().size()).sum();
-        Overall overall = new Overall(progress, total);
-        Path work = out.resolve(WORK_DIR);
+        return new Plan(scans, names, skipped);
+    }
+
+    /** How a scan that could not run is listed among the fields not scanned. */
+    static String failure(IllegalArgumentException e) {
+        return "scan failed: " + e.getMessage();
+    }
+
+    /** The map's rows of one finished scan. */
+    static List<Row> rows(ScanRequest.Built b, ScanResult r) {
         List<Row> rows = new ArrayList<>();
-        for (int i = 0; i < scans.size(); i++) {
-            ScanRequest.Built b = scans.get(i);
-            ScanResult r;
-            try {
-                r = b.scan().run(b.evaluator(), work.resolve(names.get(i)), resume, threads, overall);
-            } catch (IllegalArgumentException e) {
-                // one scan that cannot run does not sink the map; it is listed with the reason
-                skipped.put(names.get(i), "scan failed: " + e.getMessage());
-                continue;
-            }
-            double[] eps = b.scan().eps();
-            for (Threshold t : r.thresholds()) {
-                rows.add(new Row((String) r.settings().get("field"), (String) r.settings().get("species"),
-                        r.axis().meaning(), t.pitchDeg(), eps[0], eps[eps.length - 1], t));
-            }
+        double[] eps = b.scan().eps();
+        for (Threshold t : r.thresholds()) {
+            rows.add(new Row((String) r.settings().get("field"), (String) r.settings().get("species"),
+                    r.axis().meaning(), t.pitchDeg(), eps[0], eps[eps.length - 1], t));
         }
-        Result result = new Result(rows, skipped);
-        write(result, out);
-        deleteTree(work);
-        return result;
+        return rows;
+    }
+
+    /** The files of a finished map, as the messages about them name them. */
+    public static final String FINISHED_FILES = "safe-use.json, safe-use.csv, safe-use.md, safe-use.png";
+
+    /** True when {@code out} holds a finished map (safe-use.json) and no partial scans. */
+    public static boolean finishedIn(Path out) {
+        return Files.exists(out.resolve("safe-use.json")) && !Files.exists(out.resolve(WORK_DIR));
     }
 
     /** Writes safe-use.md, .csv, .json and .png into {@code out}, each atomically. */
@@ -319,7 +357,7 @@ public final class SafeUseMap {
         return some;
     }
 
-    private static void deleteTree(Path dir) {
+    public static void deleteTree(Path dir) {
         if (!Files.exists(dir)) {
             return;
         }
@@ -333,7 +371,7 @@ public final class SafeUseMap {
     }
 
     /** Folds the progress of the successive scans into one count over the whole map. */
-    private static final class Overall implements ScanProgress {
+    static final class Overall implements ScanProgress {
         private final ScanProgress target;
         private final int total;
         private boolean started;

@@ -11,7 +11,9 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
+import java.util.TreeSet;
 
 /**
  * The partial results of a scan, saved as each point completes so that an interrupted scan
@@ -42,37 +44,75 @@ public final class ScanCheckpoint {
     /**
      * Opens the checkpoint of a scan in {@code dir}.
      *
-     * @param settings what the points depend on; a resumed file must have been made with equal ones
-     * @param resume   true to take up the points already saved; false to start afresh
-     * @throws IllegalArgumentException when resuming from a file made with other settings
+     * @param scan   the scan: its settings must equal the saved ones, and every saved point must
+     *               be one of its grid and carry the values its thresholds read
+     * @param resume true to take up the points already saved; false to start afresh
+     * @throws IllegalArgumentException when resuming from a file made with other settings, or
+     *         from a file that is empty, not JSON, or damaged ({@link #load}); nothing is computed then
      */
-    public static ScanCheckpoint open(Path dir, Map<String, Object> settings, boolean resume) {
-        ScanCheckpoint cp = new ScanCheckpoint(dir.resolve(FILE_NAME), settings);
+    public static ScanCheckpoint open(Path dir, BreakdownScan scan, boolean resume) {
+        ScanCheckpoint cp = new ScanCheckpoint(dir.resolve(FILE_NAME), scan.settings());
         if (resume && Files.exists(cp.file)) {
-            cp.load();
+            cp.load(scan);
         }
         return cp;
     }
 
-    private void load() {
-        JsonNode root;
-        try {
-            root = ScanJson.MAPPER.readTree(file.toFile());
-        } catch (IOException e) {
-            throw new IllegalArgumentException("--resume: cannot read the partial results " + file
-                    + " (" + e.getMessage() + "); delete it to start afresh");
-        }
+    /**
+     * Reads and checks the saved file. A damaged file is refused as a whole rather than taken up in
+     * part: a point with a missing or mistyped value would otherwise enter the results as a
+     * silent gap (or be recomputed unnoticed), and a file that was edited or damaged once is not
+     * trusted for its other points either. The message names the file and the first defect.
+     */
+    private void load(BreakdownScan scan) {
+        JsonNode root = ScanJson.readFile(file, "--resume: the partial results");
         JsonNode saved = root.get("scan");
+        if (saved == null || !saved.isObject()) {
+            throw damaged("it has no 'scan' object with the settings");
+        }
         JsonNode now = ScanJson.MAPPER.valueToTree(settings);
-        if (saved == null || !saved.equals(now)) {
+        if (!saved.equals(now)) {
             throw new IllegalArgumentException("--resume: the partial results in " + file.getParent()
                     + " were made with different settings (saved: " + saved + "; now: " + now
                     + "); use the same options, another --out, or drop --resume");
         }
-        for (JsonNode n : root.withArray("points")) {
-            ScanPoint p = ScanJson.readPoint(n);
-            done.put(new Key(p.pitchDeg(), p.eps()), p);
+        JsonNode points = root.get("points");
+        if (points == null || !points.isArray()) {
+            throw damaged("'points' is " + ScanJson.kind(points) + ", not an array");
         }
+        Set<String> metricKeys = null;
+        for (int i = 0; i < points.size(); i++) {
+            String where = "point " + (i + 1) + " of " + points.size();
+            ScanPoint p;
+            try {
+                p = ScanJson.readCheckedPoint(points.get(i), scan.eps(), scan.pitches(), requiredKeys(scan));
+            } catch (IllegalArgumentException e) {
+                throw damaged(where + " " + e.getMessage());
+            }
+            Set<String> keys = new TreeSet<>(p.values().keySet());
+            keys.removeIf(k -> !ScanMetric.isMetricKey(k));
+            if (metricKeys != null && !metricKeys.equals(keys)) {
+                throw damaged(where + " has the metrics " + keys + " where point 1 has " + metricKeys);
+            }
+            metricKeys = keys;
+            if (done.put(new Key(p.pitchDeg(), p.eps()), p) != null) {
+                throw damaged(where + " repeats pitch " + p.pitchDeg() + " deg, eps " + p.eps());
+            }
+        }
+    }
+
+    /** The values the scan's thresholds read: each thresholded metric's chosen summary. */
+    private static Set<String> requiredKeys(BreakdownScan scan) {
+        Set<String> keys = new TreeSet<>();
+        for (ScanMetric m : scan.tolerances().keySet()) {
+            keys.add(m.key(scan.statistic()));
+        }
+        return keys;
+    }
+
+    private IllegalArgumentException damaged(String what) {
+        return new IllegalArgumentException("--resume: the partial results " + file + " are damaged: " + what
+                + "; delete the file to start afresh (its points are then computed again)");
     }
 
     /** The saved point at this pitch angle (degrees) and ε, or null. */
@@ -92,7 +132,7 @@ public final class ScanCheckpoint {
         root.put("scan", settings);
         List<Object> points = new ArrayList<>();
         for (ScanPoint q : done.values()) {
-            points.add(ScanJson.pointMap(q));
+            points.add(ScanJson.pointMap(q, true));
         }
         root.put("points", points);
         AtomicFiles.write(file, ScanJson.write(root));

@@ -142,6 +142,12 @@ public final class ScanCommand implements Runnable {
     @Option(names = "--resume", description = "Take up the points saved by an interrupted scan with the same options in --out.")
     boolean resume;
 
+    @Option(names = "--shard", paramLabel = "I/K",
+            description = "Compute only part I (counted from 0) of K parts of nearly equal estimated cost, as one task "
+                    + "of a job array, into --out/shard-I-of-K; 'twinorbit merge --out DIR' joins the K parts into the "
+                    + "files a single run writes. With --resume a shard takes up its own saved points.")
+    String shard;
+
     @Mixin
     ExecutionOptions execution;
 
@@ -155,7 +161,20 @@ public final class ScanCommand implements Runnable {
             return;
         }
         ScanRequest.Built setup = setup();
+        Shard part = shard == null ? null : Shard.parse(shard);
         prepareOut();
+        if (part != null) {
+            runShard(part, () -> ShardRuns.scan(setup, recordedOptions(), part, out, resume, threads(), ScanProgress.NONE),
+                    bar -> ShardRuns.scan(setup, recordedOptions(), part, out, resume, threads(), bar), "scan " + field);
+            return;
+        }
+        if (resume && setup.scan().finishedIn(out)) {
+            PrintWriter w = spec.commandLine().getOut();
+            w.printf("--resume: %s holds this scan finished (%s) and no partial results: nothing to resume; "
+                    + "drop --resume to compute it again%n", out, BreakdownScan.FINISHED_FILES);
+            w.flush();
+            return;
+        }
         long t0 = System.nanoTime();
         ScanResult r;
         if (execution.quiet()) {
@@ -189,7 +208,21 @@ public final class ScanCommand implements Runnable {
             throw new IllegalArgumentException("--safe-use needs --points >= 2 and --phases in [1, 1024], got "
                     + points + " and " + phases);
         }
+        Shard part = shard == null ? null : Shard.parse(shard);
         prepareOut();
+        if (part != null) {
+            SafeUseMap.Plan plan = SafeUseMap.plan(new SafeUseMap.Resolution(points, phases), threads);
+            runShard(part, () -> ShardRuns.safeUse(plan, recordedOptions(), part, out, resume, threads, ScanProgress.NONE),
+                    bar -> ShardRuns.safeUse(plan, recordedOptions(), part, out, resume, threads, bar), "safe-use map");
+            return;
+        }
+        if (resume && SafeUseMap.finishedIn(out)) {
+            PrintWriter w = spec.commandLine().getOut();
+            w.printf("--resume: %s holds a finished safe-use map (%s) and no partial scans: nothing to resume; "
+                    + "drop --resume to compute it again%n", out, SafeUseMap.FINISHED_FILES);
+            w.flush();
+            return;
+        }
         long t0 = System.nanoTime();
         SafeUseMap.Resolution res = new SafeUseMap.Resolution(points, phases);
         SafeUseMap.Result r;
@@ -207,6 +240,42 @@ public final class ScanCommand implements Runnable {
         w.printf("wrote %s/safe-use.md, safe-use.csv, safe-use.json, safe-use.png; %s (%s)%n", out, total,
                 Timings.FILE_NAME);
         w.flush();
+    }
+
+    /**
+     * Runs one shard, quietly or with a progress bar; a finished shard under --resume is left as it is.
+     *
+     * @return nothing; prints where the shard's results are
+     */
+    private void runShard(Shard part, java.util.function.Supplier<Path> quiet,
+                          java.util.function.Function<ScanProgress, Path> shown, String label) {
+        PrintWriter w = spec.commandLine().getOut();
+        if (resume && ShardRuns.finished(out, part)) {
+            w.printf("--resume: shard %d/%d in %s is finished (%s): nothing to resume%n", part.index(), part.count(),
+                    out.resolve(part.folder()), ShardFile.FILE_NAME);
+            w.flush();
+            return;
+        }
+        long t0 = System.nanoTime();
+        Path folder;
+        if (execution.quiet()) {
+            folder = quiet.get();
+        } else {
+            try (ScanProgressBar bar = new ScanProgressBar(label + ", shard " + part.index() + "/" + part.count())) {
+                folder = shown.apply(bar);
+            }
+        }
+        String total = String.format(java.util.Locale.ROOT, "shard %d/%d in %.1f s", part.index(), part.count(),
+                (System.nanoTime() - t0) * 1e-9);
+        new Timings("twinorbit scan --shard " + part.index() + "/" + part.count()).total(total).write(folder);
+        w.printf("wrote %s/%s; %s (%s); when every shard is done: twinorbit merge --out %s%n", folder,
+                ShardFile.FILE_NAME, total, Timings.FILE_NAME, out);
+        w.flush();
+    }
+
+    /** The options as given that can change a result ({@link RecordedOptions}). */
+    List<String> recordedOptions() {
+        return RecordedOptions.of(spec);
     }
 
     /** Makes --out, after every other option has been checked and before any orbit runs. */
@@ -295,7 +364,7 @@ public final class ScanCommand implements Runnable {
         return tol;
     }
 
-    private static void printSummary(PrintWriter w, ScanResult r) {
+    public static void printSummary(PrintWriter w, ScanResult r) {
         for (Threshold t : r.thresholds()) {
             String at = t.outcome().hasEpsStar()
                     ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())

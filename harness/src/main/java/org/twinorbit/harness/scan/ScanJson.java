@@ -83,30 +83,131 @@ public final class ScanJson {
         }
     }
 
-    /** One point as an ordered map ready for Jackson. */
+    /** One point as an ordered map ready for Jackson, counts rounded as scan.json has them. */
     static Map<String, Object> pointMap(ScanPoint p) {
+        return pointMap(p, false);
+    }
+
+    /**
+     * One point as an ordered map, every value exact when {@code exact}: the form of the partial
+     * and shard files, read back into the very values an uninterrupted run holds (a count that is
+     * a mean over the phases, such as 7974.5, would otherwise come back rounded and print
+     * differently in scan.md).
+     */
+    static Map<String, Object> pointMap(ScanPoint p, boolean exact) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("eps", p.eps());
         m.put("energy_ev", p.energyEv());
         m.put("pitch_deg", p.pitchDeg());
         for (Map.Entry<String, Double> e : p.values().entrySet()) {
-            m.put(e.getKey(), COUNTS.contains(e.getKey()) ? count(e.getValue()) : number(e.getValue()));
+            m.put(e.getKey(), COUNTS.contains(e.getKey()) && !exact ? count(e.getValue()) : number(e.getValue()));
         }
         return m;
     }
 
-    /** Reads back a point written by {@link #pointMap}. */
-    static ScanPoint readPoint(JsonNode n) {
-        Map<String, Double> values = new LinkedHashMap<>();
-        for (Iterator<Map.Entry<String, JsonNode>> it = n.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
-            String k = e.getKey();
-            if (!k.equals("eps") && !k.equals("energy_ev") && !k.equals("pitch_deg")) {
-                values.put(k, readNumber(e.getValue()));
+    /**
+     * Reads back a point written by {@link #pointMap} and checks it: an object whose {@code eps},
+     * {@code energy_ev} and {@code pitch_deg} are finite numbers, {@code eps} and {@code pitch_deg} among {@code eps}
+     * and {@code pitches} (unless null), every other value a number, null, "inf" or "-inf", and
+     * every key of {@code required} present.
+     *
+     * @throws IllegalArgumentException saying what is wrong, worded to follow "point N"
+     */
+    static ScanPoint readCheckedPoint(JsonNode n, double[] eps, List<Double> pitches, Set<String> required) {
+        if (n == null || !n.isObject()) {
+            throw new IllegalArgumentException("is " + kind(n) + ", not an object");
+        }
+        double e = coordinate(n, "eps");
+        double w = coordinate(n, "energy_ev");
+        double pitch = coordinate(n, "pitch_deg");
+        if (eps != null && java.util.Arrays.stream(eps).noneMatch(x -> x == e)) {
+            throw new IllegalArgumentException("has eps " + e + ", which is not on the scan's grid");
+        }
+        if (pitches != null && !pitches.contains(pitch)) {
+            throw new IllegalArgumentException("has pitch_deg " + pitch + ", which is not one of the scan's " + pitches);
+        }
+        for (String k : required) {
+            if (!n.has(k)) {
+                throw new IllegalArgumentException("(eps " + e + ", pitch " + pitch + " deg) has no '" + k
+                        + "', a metric the scan's thresholds read");
             }
         }
-        return new ScanPoint(n.get("eps").asDouble(), n.get("energy_ev").asDouble(),
-                n.get("pitch_deg").asDouble(), values);
+        Map<String, Double> values = new LinkedHashMap<>();
+        for (Iterator<Map.Entry<String, JsonNode>> it = n.fields(); it.hasNext(); ) {
+            Map.Entry<String, JsonNode> entry = it.next();
+            String k = entry.getKey();
+            if (!k.equals("eps") && !k.equals("energy_ev") && !k.equals("pitch_deg")) {
+                JsonNode v = entry.getValue();
+                if (!(v.isNumber() || v.isNull() || v.isTextual() && (v.asText().equals("inf") || v.asText().equals("-inf")))) {
+                    throw new IllegalArgumentException("(eps " + e + ", pitch " + pitch + " deg) has '" + k + "' = " + v
+                            + ": not a number, null, \"inf\" or \"-inf\"");
+                }
+                values.put(k, readNumber(v));
+            }
+        }
+        return new ScanPoint(e, w, pitch, values);
+    }
+
+    /** What a JSON value is, for messages: "an object", "an array", "a string", ..., "missing". */
+    static String kind(JsonNode n) {
+        if (n == null || n.isMissingNode()) {
+            return "missing";
+        }
+        return switch (n.getNodeType()) {
+            case OBJECT, POJO -> "an object";
+            case ARRAY -> "an array";
+            case STRING -> "a string";
+            case NUMBER -> "a number";
+            case BOOLEAN -> "a boolean";
+            case NULL -> "null";
+            default -> "a " + n.getNodeType().toString().toLowerCase(java.util.Locale.ROOT);
+        };
+    }
+
+    private static double coordinate(JsonNode n, String key) {
+        JsonNode v = n.get(key);
+        if (v == null) {
+            throw new IllegalArgumentException("has no '" + key + "'");
+        }
+        if (!v.isNumber() || !Double.isFinite(v.asDouble())) {
+            throw new IllegalArgumentException("has '" + key + "' = " + v + ", not a finite number");
+        }
+        return v.asDouble();
+    }
+
+    /**
+     * Reads a JSON file that must hold an object.
+     *
+     * @param what the start of a message naming the file's role, e.g. "--resume: the partial results"
+     * @throws IllegalArgumentException when the file cannot be read, is empty, is not JSON (with
+     *         line and column) or does not hold an object
+     */
+    static JsonNode readFile(java.nio.file.Path file, String what) {
+        String text;
+        try {
+            text = java.nio.file.Files.readString(file);
+        } catch (java.io.IOException e) {
+            throw new IllegalArgumentException(what + " " + file + " cannot be read (" + e.getMessage() + ")");
+        }
+        if (text.isBlank()) {
+            throw new IllegalArgumentException(what + " " + file + " are an empty file: no settings, no points; "
+                    + "delete it to start afresh");
+        }
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            com.fasterxml.jackson.core.JsonLocation at = e.getLocation();
+            throw new IllegalArgumentException(what + " " + file + " are not valid JSON"
+                    + (at == null ? "" : " at line " + at.getLineNr() + ", column " + at.getColumnNr())
+                    + " (" + e.getOriginalMessage() + "; a truncated or edited file?); delete it to start afresh");
+        }
+        if (!root.isObject()) {
+            throw new IllegalArgumentException(what + " " + file + " are damaged: the file holds "
+                    + kind(root) + ", not a JSON object; "
+                    + "delete it to start afresh");
+        }
+        return root;
     }
 
     static Map<String, Object> thresholdMap(Threshold t, ScanAxis axis) {

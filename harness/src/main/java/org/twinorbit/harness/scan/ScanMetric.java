@@ -82,6 +82,16 @@ public enum ScanMetric {
         };
     }
 
+    /** True for a point value that summarises a metric over the ensemble ({@code <metric>_mean/_rms/_worst}). */
+    static boolean isMetricKey(String pointKey) {
+        for (ScanMetric m : values()) {
+            if (pointKey.equals(m.meanKey()) || pointKey.equals(m.rmsKey()) || pointKey.equals(m.worstKey())) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** The metric with this key. @throws IllegalArgumentException listing the allowed keys */
     public static ScanMetric ofKey(String key) {
         String k = key.trim().toLowerCase(Locale.ROOT);

@@ -34,13 +34,30 @@ public final class ScanRunner {
     public static List<ScanPoint> run(double[] eps, List<Double> pitches, ScanAxis axis,
                                       PointEvaluator evaluator, ScanCheckpoint checkpoint,
                                       int threads, ScanProgress progress) {
+        return List.of(run(eps, pitches, axis, evaluator, checkpoint, threads, progress, k -> true));
+    }
+
+    /**
+     * Runs only the points {@code mine} selects (a shard's part of the scan).
+     *
+     * @param mine selects points by their index, pitch-major then increasing ε
+     * @return the points by index, null where not selected
+     */
+    static ScanPoint[] run(double[] eps, List<Double> pitches, ScanAxis axis, PointEvaluator evaluator,
+                           ScanCheckpoint checkpoint, int threads, ScanProgress progress,
+                           java.util.function.IntPredicate mine) {
         if (threads < 1) {
             throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
         }
         int total = eps.length * pitches.size();
         ScanPoint[] out = new ScanPoint[total];
         List<Integer> pending = new ArrayList<>();
+        int selected = 0;
         for (int k = 0; k < total; k++) {
+            if (!mine.test(k)) {
+                continue;
+            }
+            selected++;
             ScanPoint saved = checkpoint.get(pitches.get(k / eps.length), eps[k % eps.length]);
             if (saved != null) {
                 out[k] = saved;
@@ -48,7 +65,7 @@ public final class ScanRunner {
                 pending.add(k);
             }
         }
-        progress.start(total, total - pending.size());
+        progress.start(selected, selected - pending.size());
         ForkJoinPool pool = new ForkJoinPool(threads);
         try {
             List<Future<?>> futures = new ArrayList<>();
@@ -79,7 +96,7 @@ public final class ScanRunner {
         } finally {
             pool.shutdownNow();
         }
-        return List.of(out);
+        return out;
     }
 
     private static ScanPoint measure(double eps, double pitch, ScanAxis axis, PointEvaluator evaluator) {

@@ -5,10 +5,9 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import org.twinorbit.harness.Format;
+import org.twinorbit.harness.cases.Case;
 import org.twinorbit.harness.report.AtomicFiles;
 import org.twinorbit.harness.report.Plots;
 import org.twinorbit.harness.report.ResultJson;
@@ -18,8 +17,6 @@ import org.twinorbit.harness.report.ToolInfo;
 import org.twinorbit.harness.run.CaseResult;
 import org.twinorbit.harness.run.Parallel;
 import org.twinorbit.harness.verdict.RowVerdict;
-import org.twinorbit.harness.verdict.VerdictReport;
-import org.twinorbit.harness.run.ResultRow;
 
 /**
  * The files of {@code twinorbit suite}: validation.md (a one-page overview, then a summary table
@@ -34,84 +31,90 @@ public final class ValidationReport {
 
     private ValidationReport() {}
 
-    /** Writes every file into dir, rendering plots on {@code threads} threads. */
-    public static void write(List<CaseResult> results, boolean quick, Path dir, int threads) {
-        // the files are independent: written on the pool together with the plots
+    /** Headings of the overview table. */
+    static final List<String> OVERVIEW_HEADINGS = List.of("case", "species", "eps", "pitch", "class", "boris energy",
+            "boris phase", "boris order", "rk4 energy", "gc-rk4 pos/rho", "model mu change", "model mu jump",
+            "model drift", "model pos/rho", "model bounce", "verdict");
+
+    /**
+     * Writes every file into dir, rendering plots on {@code threads} threads.
+     *
+     * @return each case's share of the tables, in the order of the results
+     */
+    public static List<CaseReport> write(List<CaseResult> results, boolean quick, Path dir, int threads) {
+        List<CaseReport> reports = reports(results, quick);
+        // the tables and the plots are independent: written on the pool together
         List<Parallel.Job> jobs = new ArrayList<>();
-        jobs.add(new Parallel.Job(2, () -> {
-            Map<String, Object> doc = new LinkedHashMap<>();
-            doc.put("suite", quick ? "quick" : "full");
-            List<Object> cases = new ArrayList<>();
-            for (CaseResult r : results) {
-                cases.add(ResultJson.caseDocument(r, ValidationSuite.verdicts(List.of(r), quick)));
+        jobs.add(new Parallel.Job(2, () -> writeTables(reports, quick, dir)));
+        Set<String> plotted = plotted(results.stream().map(r -> r.resolved().spec()).toList());
+        for (CaseResult r : results) {
+            if (plotted.contains(r.resolved().spec().name())) {
+                jobs.add(new Parallel.Job(1, () -> writePlots(r, dir)));
             }
-            doc.put("cases", cases);
-            AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(ToolInfo.stamped(doc)));
-        }));
-        jobs.add(new Parallel.Job(1, () -> {
-            StringBuilder csv = new StringBuilder(ResultTables.csvHeader());
-            for (CaseResult r : results) {
-                csv.append(ResultTables.csvRows(r));
-            }
-            AtomicFiles.write(dir.resolve("validation.csv"), csv.toString());
-        }));
-        for (CaseResult r : plotted(results)) {
-            jobs.add(new Parallel.Job(1, () -> Plots.writeAll(r, dir.resolve("plots"), r.resolved().spec().name() + "-")));
         }
         new Parallel(threads, true, "report").run(jobs);
-        AtomicFiles.write(dir.resolve("validation.md"), markdown(results, quick));
+        return reports;
     }
 
-    /** The first case of each field: the one whose plots the report shows. */
-    static List<CaseResult> plotted(List<CaseResult> results) {
+    /** Each case's share of the tables, in the order of the results. */
+    public static List<CaseReport> reports(List<CaseResult> results, boolean quick) {
+        return results.stream().map(r -> CaseReport.of(r, quick)).toList();
+    }
+
+    /**
+     * Writes validation.json, validation.csv and validation.md (not the plots) from the cases' shares,
+     * in report order: what a single run and a merge of shards both call.
+     */
+    public static void writeTables(List<CaseReport> reports, boolean quick, Path dir) {
+        Map<String, Object> doc = new LinkedHashMap<>();
+        doc.put("suite", quick ? "quick" : "full");
+        doc.put("cases", reports.stream().map(CaseReport::document).toList());
+        AtomicFiles.write(dir.resolve("validation.json"), ResultJson.write(ToolInfo.stamped(doc)));
+        StringBuilder csv = new StringBuilder(ResultTables.csvHeader());
+        for (CaseReport r : reports) {
+            csv.append(r.csvRows());
+        }
+        AtomicFiles.write(dir.resolve("validation.csv"), csv.toString());
+        AtomicFiles.write(dir.resolve("validation.md"), markdown(reports, quick));
+    }
+
+    /** Writes the case's plots into {@code dir}/plots (those of the cases {@link #plotted} names). */
+    public static void writePlots(CaseResult r, Path dir) {
+        Plots.writeAll(r, dir.resolve(PLOTS), r.resolved().spec().name() + "-");
+    }
+
+    /** The folder of the plots under the report's directory. */
+    public static final String PLOTS = "plots";
+    /** The plots of a plotted case: {@code plots/<case>-<kind>.png} ({@link Plots#writeAll}). */
+    public static final List<String> PLOT_KINDS = List.of("mu", "energy", "orbit", "convergence");
+
+    /** The names of the first case of each field: those whose plots the report shows. */
+    public static Set<String> plotted(List<Case> cases) {
         Set<String> seen = new LinkedHashSet<>();
-        List<CaseResult> out = new ArrayList<>();
-        for (CaseResult r : results) {
-            if (seen.add(r.resolved().spec().field())) {
-                out.add(r);
+        Set<String> out = new LinkedHashSet<>();
+        for (Case c : cases) {
+            if (seen.add(c.field())) {
+                out.add(c.name());
             }
         }
         return out;
     }
 
     /** The one-page overview: one line per case with the numbers that matter most. */
-    public static TextTable overview(List<CaseResult> results, boolean quick) {
-        TextTable t = new TextTable(List.of("case", "species", "eps", "pitch", "class", "boris energy",
-                "boris phase", "boris order", "rk4 energy", "gc-rk4 pos/rho", "model mu change", "model mu jump",
-                "model drift", "model pos/rho", "model bounce", "verdict"));
-        for (CaseResult r : results) {
-            ResultRow boris = find(r, "boris", "discretisation");
-            ResultRow rk4 = find(r, "rk4", "discretisation");
-            ResultRow gc = find(r, "gc-rk4", "discretisation");
-            ResultRow model = find(r, "gc-reference", "model");
-            List<String> bad = new ArrayList<>();
-            for (RowVerdict v : ValidationSuite.verdicts(List.of(r), quick)) {
-                String cell = VerdictReport.cell(v);
-                if (!cell.isEmpty()) {
-                    bad.add(v.integrator() + ": " + cell);
-                }
-            }
-            t.add(List.of(r.resolved().spec().name(), r.resolved().species().name(), Format.number(r.resolved().eps()),
-                    Format.number(r.resolved().spec().pitchDeg()), model == null ? "—" : model.orbitClass(),
-                    worst(boris, "energy_error"), worst(boris, "phase_error"),
-                    boris == null || Double.isNaN(boris.order()) ? "—" : String.format(Locale.ROOT, "%.2f", boris.order()),
-                    worst(rk4, "energy_error"), worst(gc, "position_error_rho"), worst(model, "mu_change"),
-                    worst(model, "mu_jump"), worst(model, "drift_error"), worst(model, "position_error_rho"),
-                    worst(model, "bounce_period_error"), bad.isEmpty() ? "" : String.join("; ", bad)));
+    public static TextTable overview(List<CaseReport> reports) {
+        TextTable t = new TextTable(OVERVIEW_HEADINGS);
+        for (CaseReport r : reports) {
+            t.add(r.overview());
         }
         return t;
     }
 
-    private static ResultRow find(CaseResult r, String name, String kind) {
-        return r.rows().stream().filter(x -> x.integrator().equals(name) && x.errorKind().equals(kind))
-                .findFirst().orElse(null);
+    /** The verdicts of every case, in report order. */
+    public static List<RowVerdict> verdicts(List<CaseReport> reports) {
+        return reports.stream().flatMap(r -> r.verdicts().stream()).toList();
     }
 
-    private static String worst(ResultRow row, String metric) {
-        return row == null ? "—" : Format.number(row.metric(metric).worst());
-    }
-
-    static String markdown(List<CaseResult> results, boolean quick) {
+    static String markdown(List<CaseReport> reports, boolean quick) {
         StringBuilder sb = new StringBuilder();
         sb.append("# twinorbit validation suite").append(quick ? " (quick)" : "").append("\n\n");
         sb.append("Generated by `twinorbit suite").append(quick ? " --quick" : "").append("`. Every case runs each ")
@@ -127,26 +130,22 @@ public final class ValidationReport {
                 .append("cases named `-shared` compare the same orbits with the one zeroth-order guiding center the ring ")
                 .append("shares, whose O(eps) start-up offset per phase shows in the drift, position and bounce ")
                 .append("columns.\n\n");
-        sb.append(overview(results, quick).markdown()).append('\n');
+        sb.append(overview(reports).markdown()).append('\n');
         Set<String> fields = new LinkedHashSet<>();
-        for (CaseResult r : results) {
-            fields.add(r.resolved().spec().field());
+        for (CaseReport r : reports) {
+            fields.add(r.field());
         }
-        List<CaseResult> plotted = plotted(results);
+        Set<String> seen = new LinkedHashSet<>();
         for (String f : fields) {
             sb.append("## Field `").append(f).append("`\n\n");
-            for (CaseResult r : results) {
-                if (!r.resolved().spec().field().equals(f)) {
+            for (CaseReport r : reports) {
+                if (!r.field().equals(f)) {
                     continue;
                 }
-                sb.append("### ").append(r.resolved().spec().name()).append("\n\n");
-                for (String line : ResultTables.describe(r)) {
-                    sb.append("- ").append(line).append('\n');
-                }
-                sb.append('\n').append(ResultTables.table(r, null).markdown()).append('\n');
-                if (plotted.contains(r)) {
-                    String n = r.resolved().spec().name();
-                    for (String p : new String[] {"mu", "energy", "orbit", "convergence"}) {
+                sb.append(r.section());
+                if (seen.add(r.field())) {
+                    String n = r.name();
+                    for (String p : PLOT_KINDS) {
                         sb.append("![").append(n).append(' ').append(p).append("](plots/").append(n).append('-')
                                 .append(p).append(".png)\n");
                     }

@@ -26,7 +26,7 @@ class BreakdownScanResumeTest {
     private static final List<Double> PITCHES = List.of(30.0, 80.0);
 
     /** A deterministic made-up model error with a power law and an exponential part. */
-    private static Map<String, Double> synthetic(double eps, double energyEv, double pitchDeg) {
+    static Map<String, Double> synthetic(double eps, double energyEv, double pitchDeg) {
         Map<String, Double> m = new LinkedHashMap<>();
         double s = Math.sin(Math.toRadians(pitchDeg));
         m.put(ScanMetric.MU_JUMP.meanKey(), 3 * Math.exp(-0.2 / eps) * s);
@@ -35,10 +35,12 @@ class BreakdownScanResumeTest {
         m.put(ScanMetric.DRIFT_ERROR.worstKey(), 2 * eps);
         m.put(ScanMetric.POSITION_ERROR.meanKey(), Double.NaN);
         m.put(ScanMetric.POSITION_ERROR.worstKey(), eps > 0.1 ? Double.POSITIVE_INFINITY : 10 * eps);
+        // a count that is a mean over the phases: scan.json rounds it, scan.md prints it
+        m.put("full_orbit_evaluations", Math.floor(1e4 * eps) + 0.5);
         return m;
     }
 
-    private static BreakdownScan scan() {
+    static BreakdownScan scan() {
         EnergyScale scale = new EnergyScale(new ConstantFieldWithLength(1.0, 1.0), Species.PROTON, Vec3.ZERO);
         Map<String, Object> settings = new LinkedHashMap<>();
         settings.put("field", "test-constant");
@@ -59,6 +61,7 @@ class BreakdownScanResumeTest {
         Path whole = dir.resolve("whole");
         scan().run(BreakdownScanResumeTest::synthetic, whole, false, 2, ScanProgress.NONE);
         String expected = Files.readString(whole.resolve("scan.json"));
+        String expectedMd = Files.readString(whole.resolve("scan.md"));
         for (String f : List.of("scan.md", "scan.csv", "scan.png")) {
             assertTrue(Files.size(whole.resolve(f)) > 0, f);
         }
@@ -98,6 +101,8 @@ class BreakdownScanResumeTest {
         assertEquals(EPS.length * PITCHES.size(), started[0]);
         assertEquals(k, started[1]);
         assertEquals(expected, Files.readString(broken.resolve("scan.json")));
+        // the partial file keeps every value exact, so the resumed table prints the same numbers
+        assertEquals(expectedMd, Files.readString(broken.resolve("scan.md")));
     }
 
     @Test
@@ -110,13 +115,16 @@ class BreakdownScanResumeTest {
 
     @Test
     void resumeWithOtherSettingsIsRefused(@TempDir Path dir) {
-        Map<String, Object> a = Map.of("field", "mirror");
+        BreakdownScan a = scan();
         ScanCheckpoint cp = ScanCheckpoint.open(dir, a, false);
-        cp.add(new ScanPoint(0.01, 1.0, 45.0, Map.of("mu_jump_worst", 1e-3)));
+        cp.add(new ScanPoint(EPS[1], 1.0, PITCHES.get(0), synthetic(EPS[1], 1.0, PITCHES.get(0))));
         assertEquals(1, ScanCheckpoint.open(dir, a, true).size());
         assertEquals(0, ScanCheckpoint.open(dir, a, false).size());
+        Map<String, Object> other = new LinkedHashMap<>(a.settings());
+        other.put("field", "dipole");
+        BreakdownScan b = new BreakdownScan(other, a.eps(), a.pitches(), a.axis(), a.tolerances(), a.statistic());
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> ScanCheckpoint.open(dir, Map.of("field", "dipole"), true));
+                () -> ScanCheckpoint.open(dir, b, true));
         assertTrue(e.getMessage().startsWith("--resume"), e.getMessage());
     }
 
