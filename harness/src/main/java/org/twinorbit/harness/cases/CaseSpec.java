@@ -114,6 +114,10 @@ public final class CaseSpec {
         if (energy != null && !(energy > 0 && Double.isFinite(energy))) {
             throw new IllegalArgumentException("energy: the kinetic energy must be > 0 eV, got " + energy);
         }
+        if (energy != null && energy > org.twinorbit.harness.Format.MAX_ENERGY_EV) {
+            throw new IllegalArgumentException("energy: the kinetic energy must be > 0 and at most "
+                    + org.twinorbit.harness.Format.MAX_ENERGY_TEXT + ", got " + energy);
+        }
         if (eps != null && !(eps > 0 && eps < 1)) {
             throw new IllegalArgumentException("eps: eps = rho/L must lie in (0, 1), got " + eps);
         }
