@@ -59,15 +59,23 @@ public final class GridCommand implements Callable<Integer> {
                 throw new BadInputException("--box: each upper bound must exceed its lower bound, got " + box);
             }
         }
+        if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+            try {
+                Fields.provider(field);
+            } catch (FieldParameterException e) {
+                throw new BadInputException("--field: " + e.getMessage());
+            }
+        }
         Field f;
         try {
             f = Fields.create(field, OptionPairs.numbers(fieldParameters, "--field-param"), Species.PROTON);
         } catch (FieldParameterException e) {
-            throw new BadInputException("field: " + e.getMessage());
+            throw new BadInputException("--field-param: " + e.getMessage());
         }
         if (!f.isStatic() || f.hasElectricField()) {
             throw new BadInputException("--field: a grid file holds a static magnetic field; '" + field + "' is not one");
         }
+        OutputFile.check(out, "--out");
         GridFile.write(f, lo, hi, new int[] {nodes.get(0), nodes.get(1), nodes.get(2)}, out);
         PrintWriter pw = spec.commandLine().getOut();
         pw.println("wrote " + out + ": " + field + " on " + nodes.get(0) + " x " + nodes.get(1) + " x " + nodes.get(2)

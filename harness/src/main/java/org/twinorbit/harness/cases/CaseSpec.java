@@ -162,11 +162,16 @@ public final class CaseSpec {
             return all;
         }
         List<String> out = new ArrayList<>();
+        List<String> named = new ArrayList<>();
         for (String c : chosen) {
             String t = c.trim();
             if (t.isEmpty() || t.equals("none")) {
                 continue;
             }
+            if (named.contains(Registry.current(t))) {
+                throw new IllegalArgumentException(option + ": '" + t + "' is given twice; name each integrator once");
+            }
+            named.add(Registry.current(t));
             if (t.equals("all")) {
                 all.stream().filter(a -> !out.contains(a)).forEach(out::add);
                 continue;
