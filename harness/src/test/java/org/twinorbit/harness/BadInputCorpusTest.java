@@ -20,7 +20,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * A corpus of bad command lines over every command (docs/design.md, bad-input rules): each is
  * refused with exit code 2, a message naming the option (or the argument) at fault, and no stack
- * trace. 174 command lines; before the fixes that came with this test, 166 were handled well. In the arguments, {@code OUT} stands for a fresh directory, {@code BASE} for a valid
+ * trace. 174 command lines; before the fixes that came with this test, 161 were handled well.
+ * In the arguments, {@code OUT} stands for a fresh directory, {@code BASE} for a valid
  * baseline file, {@code EXPORT} for a case directory written by 'export', {@code FILES} for a
  * directory of odd input files.
  */
