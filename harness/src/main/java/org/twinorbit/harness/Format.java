@@ -42,6 +42,14 @@ public final class Format {
     }
 
     /**
+     * The largest kinetic energy any option or case file accepts (eV): above the most energetic
+     * cosmic rays observed, about 3e20 eV (from memory), and far below where p and mu overflow.
+     */
+    public static final double MAX_ENERGY_EV = 1e21;
+    /** {@link #MAX_ENERGY_EV} as messages print it. */
+    public static final String MAX_ENERGY_TEXT = "1e+21 eV";
+
+    /**
      * An energy as typed: a number in eV, or with a unit eV, keV, MeV or GeV (case-insensitive,
      * with or without a space: "30keV", "1.5 MeV").
      *

@@ -52,11 +52,18 @@ public final class GridCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         GridSpec grid = GridSpec.parse(geometry, box, nodes);
+        if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+            try {
+                Fields.provider(field);
+            } catch (FieldParameterException e) {
+                throw new BadInputException("--field: " + e.getMessage());
+            }
+        }
         Field f;
         try {
             f = Fields.create(field, OptionPairs.numbers(fieldParameters, "--field-param"), Species.PROTON);
         } catch (FieldParameterException e) {
-            throw new BadInputException("field: " + e.getMessage());
+            throw new BadInputException("--field-param: " + e.getMessage());
         }
         if (!f.isStatic() || (f.hasElectricField() && !f.hasPotential())) {
             throw new BadInputException("--field: a grid file holds a static B and optionally Phi (E = -grad Phi); '"
@@ -65,6 +72,7 @@ public final class GridCommand implements Callable<Integer> {
         if (!Double.isFinite(f.length())) {
             throw new BadInputException("--field: '" + field + "' has no length L, which a grid file must carry");
         }
+        OutputFile.check(out, "--out");
         try {
             grid.write(f, out);
         } catch (FieldParameterException e) {

@@ -60,11 +60,27 @@ public final class ProbeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (!Double.isFinite(time)) {
+            throw new BadInputException("--time: give a finite time in s, got " + time);
+        }
+        Species particle;
+        try {
+            particle = Species.parse(species);
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException("--species: " + e.getMessage());
+        }
+        if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+            try {
+                Fields.provider(field);
+            } catch (FieldParameterException e) {
+                throw new BadInputException("--field: " + e.getMessage());
+            }
+        }
         Field f;
         try {
-            f = Fields.create(field, parameters(), Species.parse(species));
+            f = Fields.create(field, parameters(), particle);
         } catch (FieldParameterException e) {
-            throw new BadInputException("field-param: " + e.getMessage());
+            throw new BadInputException("--field-param: " + e.getMessage());
         }
         List<double[]> at = new ArrayList<>();
         for (String p : points) {

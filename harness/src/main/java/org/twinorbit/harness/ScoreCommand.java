@@ -84,6 +84,9 @@ public final class ScoreCommand implements Callable<Integer> {
         if (out != null) {
             OutputDirectory.prepare(out);
         }
+        if (trajectories != null && !java.nio.file.Files.isDirectory(trajectories)) {
+            throw new BadInputException("--trajectories: " + trajectories + " is not a directory");
+        }
         Path from = trajectories != null ? trajectories : export;
         CaseRunner runner = new CaseRunner(execution.threads(), execution.quiet());
         ExportedRuns runs;

@@ -7,9 +7,8 @@ import picocli.CommandLine.Command;
 @Command(name = "twinorbit",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
-        description = {
-            "Runs the same charged particles as full orbits and as guiding centers through the same",
-            "fields, and measures how well each integrator and each model keeps the physics."},
+        description = "Runs the same charged particles as full orbits and as guiding centers through the same "
+                + "fields, and measures how well each integrator and each model keeps the physics.",
         subcommands = {FieldsCommand.class, ProbeCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
             org.twinorbit.harness.scan.ScanCommand.class, MergeCommand.class, BaselineCommand.class, CheckCommand.class,
             ExportCommand.class, ScoreCommand.class, PrecisionCommand.class, GridCommand.class, GridStudyCommand.class,
@@ -29,6 +28,7 @@ public final class TwinorbitCommand implements Runnable {
         CommandLine cl = new CommandLine(new TwinorbitCommand());
         cl.setExecutionExceptionHandler(new UserErrorHandler());
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setHelpFactory(WordWrapHelp::new);
         // everything after the baseline's COMMAND belongs to that command, options included
         cl.getSubcommands().get("baseline").setStopAtPositional(true);
         // help goes to stdout, usage errors to stderr: colours only when both are terminals

@@ -114,6 +114,10 @@ public final class CaseSpec {
         if (energy != null && !(energy > 0 && Double.isFinite(energy))) {
             throw new IllegalArgumentException("energy: the kinetic energy must be > 0 eV, got " + energy);
         }
+        if (energy != null && energy > org.twinorbit.harness.Format.MAX_ENERGY_EV) {
+            throw new IllegalArgumentException("energy: the kinetic energy must be > 0 and at most "
+                    + org.twinorbit.harness.Format.MAX_ENERGY_TEXT + ", got " + energy);
+        }
         if (eps != null && !(eps > 0 && eps < 1)) {
             throw new IllegalArgumentException("eps: eps = rho/L must lie in (0, 1), got " + eps);
         }
@@ -158,11 +162,16 @@ public final class CaseSpec {
             return all;
         }
         List<String> out = new ArrayList<>();
+        List<String> named = new ArrayList<>();
         for (String c : chosen) {
             String t = c.trim();
             if (t.isEmpty() || t.equals("none")) {
                 continue;
             }
+            if (named.contains(Registry.current(t))) {
+                throw new IllegalArgumentException(option + ": '" + t + "' is given twice; name each integrator once");
+            }
+            named.add(Registry.current(t));
             if (t.equals("all")) {
                 all.stream().filter(a -> !out.contains(a)).forEach(out::add);
                 continue;

@@ -10,9 +10,10 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
-import me.tongfei.progressbar.ConsoleProgressBarConsumer;
+import java.util.concurrent.atomic.AtomicInteger;
 import me.tongfei.progressbar.ProgressBar;
-import me.tongfei.progressbar.ProgressBarBuilder;
+import org.twinorbit.harness.progress.ProgressBars;
+import org.twinorbit.harness.progress.TimeLeft;
 
 /**
  * Runs independent jobs on a fixed number of threads. Jobs start in order of decreasing
@@ -62,26 +63,28 @@ public final class Parallel {
                 done.submit(j.work(), j);
                 total += Math.max(j.cost(), 0);
             }
-            // progress counts estimated cost, not jobs, so that the time left means something
+            // the bar and the time left follow estimated cost, not jobs, so that the time left means
+            // something; the count beside the bar is in jobs
             double perUnit = total > 0 ? BAR_UNITS / total : 0;
-            long start = System.nanoTime();
-            int finished = 0;
+            TimeLeft time = TimeLeft.ofSystemClock();
+            time.start(total, 0);
+            AtomicInteger finished = new AtomicInteger();
             double costDone = 0;
-            while (finished < order.size()) {
+            while (finished.get() < order.size()) {
                 Future<Job> f = done.poll(200, TimeUnit.MILLISECONDS);
                 if (f != null) {
-                    costDone += Math.max(f.get().cost(), 0);
-                    finished++;
+                    double cost = Math.max(f.get().cost(), 0);
+                    costDone += cost;
+                    time.done(cost);
+                    finished.incrementAndGet();
                     if (bar != null) {
                         bar.stepTo(Math.round(costDone * perUnit));
                     }
                 }
-                if (bar == null && !quiet && finished < order.size()
-                        && System.nanoTime() - start > BAR_AFTER_MS * 1_000_000L) {
-                    bar = new ProgressBarBuilder().setTaskName(label).setInitialMax(BAR_UNITS).setUnit("%", 10)
-                            .setConsumer(new ConsoleProgressBarConsumer(System.err))
-                            .setUpdateIntervalMillis(250).build();
-                    bar.stepTo(Math.round(costDone * perUnit));
+                if (bar == null && !quiet && finished.get() < order.size()
+                        && time.elapsed().toMillis() > BAR_AFTER_MS) {
+                    bar = ProgressBars.onStderr(label, BAR_UNITS, Math.round(costDone * perUnit),
+                            () -> ProgressBars.count(finished.get(), order.size(), "jobs"), time);
                 }
             }
         } catch (InterruptedException e) {

@@ -370,7 +370,10 @@ public final class SafeUseMap {
         }
     }
 
-    /** Folds the progress of the successive scans into one count over the whole map. */
+    /**
+     * Folds the progress of the successive scans into one count over the whole map; the points a
+     * later scan takes up from disk are passed on as resumed, not as computed.
+     */
     static final class Overall implements ScanProgress {
         private final ScanProgress target;
         private final int total;
@@ -384,12 +387,16 @@ public final class SafeUseMap {
         @Override
         public synchronized void start(int scanTotal, int alreadyDone) {
             if (!started) {
-                target.start(total, 0);
+                target.start(total, alreadyDone);
                 started = true;
+            } else if (alreadyDone > 0) {
+                target.resumed(alreadyDone);
             }
-            for (int i = 0; i < alreadyDone; i++) {
-                target.pointDone();
-            }
+        }
+
+        @Override
+        public void resumed(int points) {
+            target.resumed(points);
         }
 
         @Override

@@ -71,7 +71,7 @@ public final class ScanCheckpoint {
             throw damaged("it has no 'scan' object with the settings");
         }
         JsonNode now = ScanJson.MAPPER.valueToTree(settings);
-        if (!saved.equals(now)) {
+        if (!resolved(saved).equals(resolved(now))) {
             throw new IllegalArgumentException("--resume: the partial results in " + file.getParent()
                     + " were made with different settings (saved: " + saved + "; now: " + now
                     + "); use the same options, another --out, or drop --resume");
@@ -113,6 +113,30 @@ public final class ScanCheckpoint {
     private IllegalArgumentException damaged(String what) {
         return new IllegalArgumentException("--resume: the partial results " + file + " are damaged: " + what
                 + "; delete the file to start afresh (its points are then computed again)");
+    }
+
+    /**
+     * The settings with the field's parameters resolved (defaults filled in), so that
+     * {@code -P Lg=1} compares equal to leaving the default of 1; unchanged when they cannot be
+     * resolved (a grid field, an unknown name), which then compare as given.
+     */
+    private static JsonNode resolved(JsonNode settings) {
+        JsonNode field = settings.get("field");
+        JsonNode given = settings.get("parameters");
+        if (field == null || !field.isTextual() || given == null || !given.isObject()) {
+            return settings;
+        }
+        try {
+            Map<String, Double> overrides = new LinkedHashMap<>();
+            given.fields().forEachRemaining(e -> overrides.put(e.getKey(), e.getValue().asDouble()));
+            Map<String, Double> all = new TreeMap<>(org.twinorbit.fields.Fields.check(
+                    org.twinorbit.fields.Fields.provider(field.asText()), overrides).asMap());
+            com.fasterxml.jackson.databind.node.ObjectNode copy = settings.deepCopy();
+            copy.set("parameters", ScanJson.MAPPER.valueToTree(all));
+            return copy;
+        } catch (IllegalArgumentException e) {
+            return settings;
+        }
     }
 
     /** The saved point at this pitch angle (degrees) and ε, or null. */

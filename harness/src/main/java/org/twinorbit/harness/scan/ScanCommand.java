@@ -295,7 +295,11 @@ public final class ScanCommand implements Runnable {
 
     /** The particle of {@code --species}. @throws IllegalArgumentException listing the allowed names */
     public Species species() {
-        return Species.parse(species);
+        try {
+            return Species.parse(species);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("--species: " + e.getMessage(), e);
+        }
     }
 
     /** The worker threads of {@code --threads}. */
@@ -308,7 +312,7 @@ public final class ScanCommand implements Runnable {
         ScanRequest q = new ScanRequest();
         q.field = field;
         q.parameters = org.twinorbit.harness.OptionPairs.numbers(params, "--field-param");
-        q.species = Species.parse(species);
+        q.species = species();
         q.pitches = pitches;
         q.epsMin = epsMin;
         q.epsMax = epsMax;

@@ -15,6 +15,12 @@ public interface ScanProgress {
     /** The scan has {@code total} points, of which {@code alreadyDone} were resumed from disk. */
     void start(int total, int alreadyDone);
 
-    /** One more point finished. */
+    /**
+     * More points resumed from disk after the start (the later scans of a resumed safe-use map);
+     * a watcher that only counts computed points may ignore them.
+     */
+    default void resumed(int points) {}
+
+    /** One more point computed. */
     void pointDone();
 }

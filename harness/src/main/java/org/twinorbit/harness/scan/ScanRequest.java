@@ -64,7 +64,15 @@ public final class ScanRequest {
         if (field == null) {
             throw new IllegalArgumentException("--field: name a field of the library (see 'twinorbit fields')");
         }
-        ScanField recipe = ScanField.of(field);
+        ScanField recipe;
+        try {
+            if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+                Fields.provider(field);
+            }
+            recipe = ScanField.of(field);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("--field: " + e.getMessage(), e);
+        }
         if (recipe.timeScale() && parameters.containsKey(recipe.parameter())) {
             throw new IllegalArgumentException("--field-param " + recipe.parameter() + ": the scan sets it from eps; "
                     + "choose the range with --eps-min and --eps-max instead");
@@ -78,7 +86,13 @@ public final class ScanRequest {
         }
         double lo = epsMin != null ? epsMin : recipe.epsMin();
         double hi = epsMax != null ? epsMax : recipe.epsMax();
-        Field f = Fields.create(field, recipe.parametersAt(parameters, lo), species);
+        Field f;
+        try {
+            f = Fields.create(field, recipe.parametersAt(parameters, lo), species);
+        } catch (IllegalArgumentException e) {
+            // the field exists (checked above): what is wrong is a parameter, or the grid file
+            throw new IllegalArgumentException((parameters.isEmpty() ? "--field: " : "--field-param: ") + e.getMessage(), e);
+        }
         Vec3 x0 = start(f, recipe);
         if (energyMin != null || energyMax != null) {
             EnergyScale scale = new EnergyScale(f, species, x0);

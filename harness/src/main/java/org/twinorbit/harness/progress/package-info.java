@@ -1,0 +1,2 @@
+/** Progress bars on stderr and the time-left estimate behind them. */
+package org.twinorbit.harness.progress;
