@@ -62,8 +62,13 @@ class ScanOptionMessagesTest {
         String[] plain = {"scan", "--field", "gradient", "--points", "2", "--phases", "2", "--quiet", "--out", out.toString()};
         CommandLine.ParseResult parsed = TwinorbitCommand.commandLine().parseArgs(plain);
         BreakdownScan s = ((ScanCommand) parsed.subcommand().commandSpec().userObject()).setup().scan();
-        ScanCheckpoint.open(out, s.settings(), false).add(new ScanPoint(s.eps()[0], 1e3, s.pitches().get(0),
-                Map.of("mu_jump", 0.0)));
+        Map<String, Double> metrics = new java.util.TreeMap<>();
+        for (ScanMetric m : ScanMetric.values()) {
+            for (String summary : new String[] {"_mean", "_rms", "_worst"}) {
+                metrics.put(m.key() + summary, 0.0);
+            }
+        }
+        ScanCheckpoint.open(out, s, false).add(new ScanPoint(s.eps()[0], 1e3, s.pitches().get(0), metrics));
         return out;
     }
 }
