@@ -14,7 +14,7 @@ public final class Fields {
 
     /** The built-in fields in the order docs/design.md lists them; user fields follow by name. */
     private static final List<String> ORDER = List.of("uniform", "crossed", "gradient", "toroidal",
-            "mirror", "dipole", "tokamak", "current-sheet", "shear", "ramp", "wave");
+            "mirror", "dipole", "tokamak", "solovev", "current-sheet", "shear", "ramp", "wave");
 
     private Fields() {}
 
