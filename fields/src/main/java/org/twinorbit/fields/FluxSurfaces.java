@@ -87,4 +87,33 @@ public final class FluxSurfaces {
         }
         return Math.abs(sum / n);
     }
+
+    /**
+     * The toroidal plasma current (A) inside the last closed surface, ∫ j_φ dA with
+     * μ0 j_φ = −Δ*ψ / R = −(ψ_RR − ψ_R/R + ψ_ZZ)/R (Ampère's law for B = ∇ψ × ∇φ + F∇φ), in polar
+     * coordinates about the axis: trapezoidal rule over nTheta angles, Gauss–Legendre over the
+     * radius. Positive along +φ.
+     */
+    public double plasmaCurrent(int nTheta) {
+        double[] p = new double[6];
+        double[] nodes = GaussLegendre.NODES;
+        double[] weights = GaussLegendre.WEIGHTS;
+        double sum = 0;
+        for (int k = 0; k < nTheta; k++) {
+            double th = 2 * Math.PI * k / nTheta;
+            double c = Math.cos(th);
+            double s = Math.sin(th);
+            double rhoB = radius(th, 1.0);
+            double inner = 0;
+            for (int i = 0; i < nodes.length; i++) {
+                double rho = 0.5 * rhoB * (nodes[i] + 1);
+                double r = rAxis + rho * c;
+                eq.psi(r, zAxis + rho * s, p);
+                double jphi = -(p[3] - p[1] / r + p[5]) / (SolovevField.MU0 * r);
+                inner += weights[i] * jphi * rho;
+            }
+            sum += 0.5 * rhoB * inner;
+        }
+        return sum * 2 * Math.PI / nTheta;
+    }
 }

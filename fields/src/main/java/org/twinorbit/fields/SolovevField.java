@@ -221,7 +221,7 @@ public final class SolovevField implements AxisymmetricEquilibrium {
                     new ParameterSpec("delta", 0.33, "1", "triangularity: the top point sits at R0 - delta a",
                             "in [-0.6, 0.6]", v -> v >= -0.6 && v <= 0.6),
                     ParameterSpec.positive("B0", 2.5, "T", "vacuum toroidal field at R = R0"),
-                    new ParameterSpec("q0", 1.2, "1", "safety factor on the magnetic axis",
+                    new ParameterSpec("q0", 2.0, "1", "safety factor on the magnetic axis",
                             "in [0.3, 10]", v -> v >= 0.3 && v <= 10),
                     new ParameterSpec("A", -0.05, "1", "share of F F' in the current (Cerfon-Freidberg A; 0: all pressure)",
                             "in [-0.5, 1]", v -> v >= -0.5 && v <= 1));

@@ -140,8 +140,8 @@ class SolovevFieldTest {
         double q1 = s.safetyFactor(1e-4, 128);
         double q2 = s.safetyFactor(4e-4, 128);
         double extrapolated = q1 - (q2 - q1) / 3;    // q = q0 + c ψ_N (ψ_N ∝ ρ² near the axis)
-        assertEquals(1.2, extrapolated, 1e-6);
-        assertTrue(s.safetyFactor(0.95, 128) > 1.2, "q rises outward in this equilibrium");
+        assertEquals(2.0, extrapolated, 1e-6);
+        assertTrue(s.safetyFactor(0.95, 128) > 2.0, "q rises outward in this equilibrium");
     }
 
     /**

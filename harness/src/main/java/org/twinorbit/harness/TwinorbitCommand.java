@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
             "fields, and measures how well each integrator and each model keeps the physics."},
         subcommands = {FieldsCommand.class, ProbeCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
             org.twinorbit.harness.scan.ScanCommand.class, BaselineCommand.class, CheckCommand.class,
-            ExportCommand.class, ScoreCommand.class, PrecisionCommand.class, GridCommand.class,
+            ExportCommand.class, ScoreCommand.class, PrecisionCommand.class, GridCommand.class, GeqdskCommand.class,
             CommandLine.HelpCommand.class})
 public final class TwinorbitCommand implements Runnable {
 
