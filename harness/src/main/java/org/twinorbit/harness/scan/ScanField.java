@@ -40,6 +40,10 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
             case "dipole" -> new ScanField(1e-3, 0.3, 60, BOUNCE_3, Double.NaN, null);
             // trapped at the outboard start r = a/2 when sin²α > (1 − r/R0)/(1 + r/R0) = 0.71, α > 57.7°
             case "tokamak" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
+            // deuterons at the default start (halfway from the axis to the outer edge, R = 1.98 m) are
+            // trapped at 75° (and still at 65°, close to the trapped-passing boundary; measured with
+            // run --duration-unit bounces at eps = 0.01 on the default shape)
+            case "solovev" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
             // 30° mirrors where |B| = 4 Bn, about 4 R_c from the sheet: each bounce crosses the
             // curved region from where the particle is adiabatic. κ = 10 at the smallest ε is deep
             // in the adiabatic regime; two bounces give two sheet crossings in each direction.
