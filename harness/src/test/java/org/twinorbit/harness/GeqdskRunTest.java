@@ -42,6 +42,25 @@ class GeqdskRunTest {
                 1e-6 * a.get("case").get("eps").asDouble());
     }
 
+    /**
+     * The limiter is the wall: a 100 keV deuteron whose guiding center starts 2 cm inside the wall
+     * on the outer midplane (the demo's wall is at R = 2.25 m there, 5 cm outside the boundary at
+     * 2.2 m) gyrates out to R_gc + ρ0 ≈ 2.26 m (ρ0 = 3.2 cm, derived) and is lost within its first
+     * gyration.
+     */
+    @Test
+    void aParticleCrossingTheLimiterIsLost() throws IOException {
+        String out = TestCommandLine.succeeded("run", "--field", "geqdsk:" + Path.of("..", "examples", "geqdsk-demo",
+                "shaped-deuteron.geqdsk"), "--species", "deuteron", "--energy", "1e5", "--pitch", "75", "--start", "2.23,0,0",
+                "--duration", "50", "--pushers", "boris", "--gc-integrators", "none", "--phases", "2", "--quiet", "--json");
+        JsonNode doc = new ObjectMapper().readTree(out);
+        double rho = doc.get("case").get("rho_m").asDouble();
+        assertTrue(2.23 + rho > 2.25 && 2.23 + 0.5 * rho < 2.25, "the gyration reaches the wall: rho = " + rho);
+        for (JsonNode r : doc.get("results")) {
+            assertTrue(r.get("status").asText().startsWith("lost"), r.toString());
+        }
+    }
+
     private static String[] concat(String[] a, String[] b) {
         String[] c = new String[a.length + b.length];
         System.arraycopy(a, 0, c, 0, a.length);
