@@ -81,6 +81,18 @@ public interface AxisymmetricEquilibrium extends Field {
     }
 
     /**
+     * p_φ = m R u_φ + q ψ(R, Z) (kg m²/s), R u_φ = x u_y − y u_x: the canonical toroidal momentum
+     * R (m u_φ + q A_φ) with R A_φ = ψ, from ψ directly (no quadrature for A's other parts).
+     */
+    static Invariant toroidalMomentum(AxisymmetricEquilibrium e) {
+        return Invariants.of("p_phi", "m R u_phi + q psi(R,Z)", "kg m^2/s", true, (s, t, x, u) -> {
+            double[] p = new double[6];
+            e.psi(Math.hypot(x[0], x[1]), x[2], p);
+            return s.mass() * (x[0] * u[1] - x[1] * u[0]) + s.charge() * p[0];
+        }, Invariants::angularScale);
+    }
+
+    /**
      * A = (ψ/R) φ̂ + A_R R̂ with A_R = (1/R) ∫₀^Z F(ψ(R, Z')) dZ', so that ∂A_R/∂Z = F/R = B_φ;
      * the integral by 48-point Gauss–Legendre quadrature (smooth integrand). Off the hot path:
      * the invariants use only R A_φ = ψ, which A_R does not change.

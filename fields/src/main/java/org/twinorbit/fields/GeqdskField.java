@@ -115,7 +115,7 @@ public final class GeqdskField implements AxisymmetricEquilibrium {
         checkNested(where);
         this.invariants = List.of(
                 Invariants.energy(this),
-                Invariants.canonicalAngular(this, "p_phi", "m R u_phi + q psi(R,Z)"));
+                AxisymmetricEquilibrium.toroidalMomentum(this));
     }
 
     private boolean inGrid(double r, double z) {

@@ -79,7 +79,7 @@ public final class SolovevField implements AxisymmetricEquilibrium {
         this.edgeGradient = Math.abs(flux.derivative(1, 0, 1 + eps, 0));
         this.invariants = List.of(
                 Invariants.energy(this),
-                Invariants.canonicalAngular(this, "p_phi", "m R u_phi + q psi(R,Z)"));
+                AxisymmetricEquilibrium.toroidalMomentum(this));
     }
 
     @Override public String name() { return "solovev"; }
