@@ -61,6 +61,17 @@ class GeqdskRunTest {
         }
     }
 
+    /** A scan reads the file too and counts bounces of the trapped orbit, like the library's tokamaks. */
+    @Test
+    void aScanRunsOnTheFileInBounces() throws IOException {
+        Path out = tmp.resolve("scan");
+        TestCommandLine.succeeded("scan", "--field", "geqdsk:" + Path.of("..", "examples", "geqdsk-demo",
+                "shaped-deuteron.geqdsk"), "--species", "deuteron", "--eps-min", "0.005", "--eps-max", "0.01",
+                "--points", "2", "--phases", "1", "--duration", "1", "--out", out.toString(), "--quiet");
+        JsonNode doc = new ObjectMapper().readTree(out.resolve("scan.json").toFile());
+        assertTrue(doc.toString().contains("\"duration_unit\":\"bounces\""), doc.toString().substring(0, 300));
+    }
+
     private static String[] concat(String[] a, String[] b) {
         String[] c = new String[a.length + b.length];
         System.arraycopy(a, 0, c, 0, a.length);

@@ -28,10 +28,14 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
     private static final ScanDuration BOUNCE_3 = new ScanDuration(3, ScanDuration.Unit.BOUNCES);
 
     /**
-     * The scan recipe of a field by its library name; fields outside the library scan like a
-     * static field at 60°.
+     * The scan recipe of a field by its library name; G-EQDSK files scan like {@code solovev}, other
+     * fields outside the library like a static field at 60°.
      */
     public static ScanField of(String field) {
+        if (field.startsWith(org.twinorbit.fields.GeqdskFile.PREFIX)) {
+            // a tokamak equilibrium scans like the library's tokamaks: bounces of a trapped orbit
+            return of("solovev");
+        }
         return switch (field) {
             case "gradient", "toroidal", "shear" -> new ScanField(1e-3, 0.3, field.equals("gradient") ? 90 : 60,
                     GYRO_20, Double.NaN, null);
