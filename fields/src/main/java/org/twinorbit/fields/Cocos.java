@@ -18,7 +18,12 @@ package org.twinorbit.fields;
  */
 public record Cocos(int index, int sigmaBp, int sigmaRPhiZ, int sigmaRhoThetaPhi, int twoPiPower) {
 
-    /** The convention a G-EQDSK file is read and written in unless the user names another. */
+    /**
+     * The convention a G-EQDSK file is read and written in unless the user names another: COCOS 1,
+     * the one most G-EQDSK files are written in (from memory; not a property of the format). A file
+     * whose signs of ψ and current contradict the σ_Bp of the chosen index is refused, naming the
+     * indices that fit; σ_RφZ and e_Bp cannot be told from a file's signs and stay the user's call.
+     */
     public static final int DEFAULT = 1;
 
     /** @throws FieldParameterException for an index that is not a COCOS */
