@@ -134,7 +134,7 @@ public final class GeqdskField implements AxisymmetricEquilibrium {
         psi.evaluate(axis[0], axis[1], p);
         double atAxis = (p[0] - psiAxis) / span;
         if (Math.abs(atAxis) > 0.05) {
-            throw new FieldParameterException(at + "psi at the magnetic axis is " + atAxis
+            throw new FieldParameterException(at + "psi at the magnetic axis is " + round(atAxis)
                     + " of the way from simag to sibry (must be ~0): simag or the axis disagrees with psirz");
         }
         int nb = data.rbbbs().length;
@@ -150,15 +150,19 @@ public final class GeqdskField implements AxisymmetricEquilibrium {
                 double level = (p[0] - psiAxis) / span;
                 if (level < prev - 1e-3) {
                     throw new FieldParameterException(at + "psi is not monotonic from the magnetic axis to boundary point "
-                            + (b + 1) + " (" + br + ", " + bz + ") m: psi_N falls from " + prev + " to " + level);
+                            + (b + 1) + " (" + br + ", " + bz + ") m: psi_N falls from " + round(prev) + " to " + round(level));
                 }
                 prev = level;
             }
             if (Math.abs(prev - 1) > 0.05) {
                 throw new FieldParameterException(at + "psi at boundary point " + (b + 1) + " (" + br + ", " + bz
-                        + ") m is " + prev + " of the way from simag to sibry (must be ~1): sibry or the boundary disagrees");
+                        + ") m is " + round(prev) + " of the way from simag to sibry (must be ~1): sibry or the boundary disagrees");
             }
         }
+    }
+
+    private static String round(double v) {
+        return String.format(java.util.Locale.ROOT, "%.4g", v);
     }
 
     @Override public String name() { return name; }
