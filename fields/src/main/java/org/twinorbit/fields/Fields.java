@@ -14,7 +14,7 @@ public final class Fields {
 
     /** The built-in fields in the order docs/design.md lists them; user fields follow by name. */
     private static final List<String> ORDER = List.of("uniform", "crossed", "gradient", "toroidal",
-            "mirror", "dipole", "tokamak", "current-sheet", "shear", "ramp", "wave");
+            "mirror", "dipole", "tokamak", "solovev", "current-sheet", "shear", "ramp", "wave");
 
     private Fields() {}
 
@@ -57,6 +57,20 @@ public final class Fields {
                         + overrides.keySet());
             }
             return GRIDS.computeIfAbsent(name, k -> GridFile.read(java.nio.file.Path.of(k.substring(GridFile.PREFIX.length()))));
+        }
+        if (name.startsWith(GeqdskFile.PREFIX)) {
+            int cocos = Cocos.DEFAULT;
+            for (Map.Entry<String, Double> e : overrides.entrySet()) {
+                double v = e.getValue();
+                if (!e.getKey().equals("cocos") || v != Math.rint(v)) {
+                    throw new FieldParameterException("a G-EQDSK field '" + name + "' has one parameter, cocos "
+                            + "(its sign convention: 1-8 or 11-18, default " + Cocos.DEFAULT + "); got " + e.getKey() + " = " + v);
+                }
+                cocos = Cocos.of((int) v).index();
+            }
+            int c = cocos;
+            return GRIDS.computeIfAbsent(name + "#cocos=" + c,
+                    k -> GeqdskFile.read(java.nio.file.Path.of(name.substring(GeqdskFile.PREFIX.length())), c));
         }
         FieldProvider p = provider(name);
         return p.create(check(p, overrides), species);

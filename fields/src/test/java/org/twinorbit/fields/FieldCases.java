@@ -32,7 +32,7 @@ final class FieldCases {
     private FieldCases() {}
 
     static Stream<Case> all() {
-        return Stream.of(uniform(), crossed(), gradient(), toroidal(), mirror(), dipole(), tokamak(),
+        return Stream.of(uniform(), crossed(), gradient(), toroidal(), mirror(), dipole(), tokamak(), solovev(),
                 currentSheet(), shear(), ramp(), wave());
     }
 
@@ -147,6 +147,26 @@ final class FieldCases {
     private static Case shear() {
         List<double[]> p = box(9, 40, new double[] {-5, -5, -5}, new double[] {5, 5, 5});
         return new Case("shear", make("shear"), p, q -> 1.0);
+    }
+
+    /** Inside the last closed surface (random, kept where the margin is positive), near the axis and the edge. */
+    private static Case solovev() {
+        SolovevField f = (SolovevField) make("solovev");
+        Random r = new Random(14);
+        List<double[]> p = new ArrayList<>();
+        while (p.size() < 40) {
+            double rr = 1.7 - 0.55 + 1.1 * r.nextDouble();
+            double z = -0.9 + 1.8 * r.nextDouble();
+            if (f.domainMargin(rr, 0, z) > 0) {
+                double phi = 2 * Math.PI * r.nextDouble();
+                p.add(new double[] {0, rr * Math.cos(phi), rr * Math.sin(phi), z});
+            }
+        }
+        double[] axis = f.axis();
+        p.add(new double[] {0, axis[0] + 1e-4, 0, 1e-4});   // by the magnetic axis
+        p.add(new double[] {0, 0, 1.7 + 0.499, 0});         // by the outer edge, φ = 90°
+        p.add(new double[] {0, 1.7 - 0.33 * 0.5, 0, 0.99 * 1.7 * 0.5}); // under the top point
+        return new Case("solovev", f, p, q -> 0.5);
     }
 
     private static Case ramp() {

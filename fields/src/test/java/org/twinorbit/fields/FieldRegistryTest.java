@@ -18,7 +18,7 @@ class FieldRegistryTest {
     @Test
     void everyBuiltInFieldIsListedInOrderThenUserFields() {
         List<String> names = Fields.all().stream().map(FieldProvider::name).toList();
-        assertEquals(List.of("uniform", "crossed", "gradient", "toroidal", "mirror", "dipole", "tokamak",
+        assertEquals(List.of("uniform", "crossed", "gradient", "toroidal", "mirror", "dipole", "tokamak", "solovev",
                 "current-sheet", "shear", "ramp", "wave", "test-along-x"), names);
         for (FieldProvider p : Fields.all()) {
             Field f = Fields.create(p.name(), P);

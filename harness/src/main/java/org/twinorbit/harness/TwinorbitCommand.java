@@ -12,6 +12,7 @@ import picocli.CommandLine.Command;
         subcommands = {FieldsCommand.class, ProbeCommand.class, IntegratorsCommand.class, RunCommand.class, SuiteCommand.class,
             org.twinorbit.harness.scan.ScanCommand.class, MergeCommand.class, BaselineCommand.class, CheckCommand.class,
             ExportCommand.class, ScoreCommand.class, PrecisionCommand.class, GridCommand.class, GridStudyCommand.class,
+            GeqdskCommand.class,
             CommandLine.HelpCommand.class})
 public final class TwinorbitCommand implements Runnable {
 

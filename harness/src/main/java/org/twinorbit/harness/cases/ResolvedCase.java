@@ -33,7 +33,8 @@ public final class ResolvedCase {
     public ResolvedCase(Case c) {
         this.spec = c;
         Species s = c.species();
-        boolean grid = c.field().startsWith(org.twinorbit.fields.GridFile.PREFIX);
+        boolean grid = c.field().startsWith(org.twinorbit.fields.GridFile.PREFIX)
+                || c.field().startsWith(org.twinorbit.fields.GeqdskFile.PREFIX);
         if (!grid) {
             try {
                 Fields.provider(c.field());

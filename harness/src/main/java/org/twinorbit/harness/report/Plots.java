@@ -53,7 +53,7 @@ public final class Plots {
     private static final Map<String, String> PROJECTION = Map.ofEntries(
             Map.entry("uniform", "x-y"), Map.entry("crossed", "t-y"), Map.entry("gradient", "t-y"),
             Map.entry("toroidal", "t-z"), Map.entry("mirror", "t-z"), Map.entry("dipole", "t-z"),
-            Map.entry("tokamak", "R-z"), Map.entry("current-sheet", "t-z"), Map.entry("shear", "y-z"),
+            Map.entry("tokamak", "R-z"), Map.entry("solovev", "R-z"), Map.entry("current-sheet", "t-z"), Map.entry("shear", "y-z"),
             Map.entry("ramp", "x-y"), Map.entry("wave", "t-y"));
 
     static {

@@ -28,10 +28,14 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
     private static final ScanDuration BOUNCE_3 = new ScanDuration(3, ScanDuration.Unit.BOUNCES);
 
     /**
-     * The scan recipe of a field by its library name; fields outside the library scan like a
-     * static field at 60°.
+     * The scan recipe of a field by its library name; G-EQDSK files scan like {@code solovev}, other
+     * fields outside the library like a static field at 60°.
      */
     public static ScanField of(String field) {
+        if (field.startsWith(org.twinorbit.fields.GeqdskFile.PREFIX)) {
+            // a tokamak equilibrium scans like the library's tokamaks: bounces of a trapped orbit
+            return of("solovev");
+        }
         return switch (field) {
             case "gradient", "toroidal", "shear" -> new ScanField(1e-3, 0.3, field.equals("gradient") ? 90 : 60,
                     GYRO_20, Double.NaN, null);
@@ -40,6 +44,10 @@ public record ScanField(double epsMin, double epsMax, double pitchDeg, ScanDurat
             case "dipole" -> new ScanField(1e-3, 0.3, 60, BOUNCE_3, Double.NaN, null);
             // trapped at the outboard start r = a/2 when sin²α > (1 − r/R0)/(1 + r/R0) = 0.71, α > 57.7°
             case "tokamak" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
+            // deuterons at the default start (halfway from the axis to the outer edge, R = 1.98 m) are
+            // trapped at 75° (and still at 65°, close to the trapped-passing boundary; measured with
+            // run --duration-unit bounces at eps = 0.01 on the default shape)
+            case "solovev" -> new ScanField(1e-3, 0.1, 75, BOUNCE_3, Double.NaN, null);
             // 30° mirrors where |B| = 4 Bn, about 4 R_c from the sheet: each bounce crosses the
             // curved region from where the particle is adiabatic. κ = 10 at the smallest ε is deep
             // in the adiabatic regime; two bounces give two sheet crossings in each direction.

@@ -74,6 +74,7 @@ public final class ValidationSuite {
             l.add(bounces("dipole-proton-eps0.05", "dipole", p, 0.05, 45, 2));
             l.add(bounces("tokamak-proton-eps0.02-trapped", "tokamak", p, 0.02, 80, 2));
         l.add(eps("tokamak-electron-eps0.01-passing", "tokamak", e, 0.01, 40, 150));
+            l.add(bounces("solovev-deuteron-eps0.02-trapped", "solovev", Species.DEUTERON, 0.02, 80, 1));
             l.add(bounces("current-sheet-proton-eps0.05", "current-sheet", p, 0.05, 60, 2));
             l.add(eps("shear-electron-eps0.05", "shear", e, 0.05, 45, 10));
             l.add(energy("ramp-proton-90", "ramp", p, 1e4, 90, 20));
@@ -106,6 +107,8 @@ public final class ValidationSuite {
         l.add(eps("tokamak-proton-eps0.02-passing", "tokamak", p, 0.02, 20, 150));
         l.add(bounces("tokamak-proton-eps0.02-trapped", "tokamak", p, 0.02, 80, 2));
         l.add(eps("tokamak-electron-eps0.01-passing", "tokamak", e, 0.01, 40, 150));
+        // the shaped tokamak: a trapped deuteron's banana in the Solov'ev equilibrium
+        l.add(bounces("solovev-deuteron-eps0.01-trapped", "solovev", Species.DEUTERON, 0.01, 80, 2));
         l.add(bounces("current-sheet-proton-eps0.02", "current-sheet", p, 0.02, 60, 2));
         l.add(bounces("current-sheet-proton-eps0.1", "current-sheet", p, 0.1, 60, 2));
         l.add(eps("shear-proton-eps0.01", "shear", p, 0.01, 60, 20));
