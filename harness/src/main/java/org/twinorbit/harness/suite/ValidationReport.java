@@ -74,11 +74,17 @@ public final class ValidationReport {
         return out;
     }
 
+    /**
+     * The overview's headings. "center pos/rho" is the error of the gyro-averaged center (the
+     * guiding center), as `center pos err/rho` in the run table.
+     */
+    public static final List<String> OVERVIEW_HEADER = List.of("case", "species", "eps", "pitch", "class",
+            "boris energy", "boris phase", "boris order", "rk4 energy", "gc-rk4 center pos/rho", "model mu change",
+            "model mu jump", "model drift", "model center pos/rho", "model bounce", "verdict");
+
     /** The one-page overview: one line per case with the numbers that matter most. */
     public static TextTable overview(List<CaseResult> results, boolean quick) {
-        TextTable t = new TextTable(List.of("case", "species", "eps", "pitch", "class", "boris energy",
-                "boris phase", "boris order", "rk4 energy", "gc-rk4 pos/rho", "model mu change", "model mu jump",
-                "model drift", "model pos/rho", "model bounce", "verdict"));
+        TextTable t = new TextTable(OVERVIEW_HEADER);
         for (CaseResult r : results) {
             ResultRow boris = find(r, "boris", "discretisation");
             ResultRow rk4 = find(r, "rk4", "discretisation");
