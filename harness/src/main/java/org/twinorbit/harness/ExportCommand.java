@@ -87,7 +87,8 @@ public final class ExportCommand implements Callable<Integer> {
         }
         pw.println("wrote " + cases.size() + " case" + (cases.size() == 1 ? "" : "s") + " into " + out
                 + (cases.size() == 1 ? "/" + names.get(0) : "") + ": manifest.json, case.csv, runs.csv, initial-states.csv, "
-                + "gc-start.csv, gc-runs.csv, field-card.json, field-card.csv");
+                + "initial-states.h5, gc-start.csv, gc-runs.csv, field-card.json, field-card.csv"
+                + (gridBox != null ? ", field-grid.h5" : ""));
         pw.flush();
         return 0;
     }

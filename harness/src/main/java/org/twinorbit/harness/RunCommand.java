@@ -67,17 +67,7 @@ public final class RunCommand implements Callable<Integer> {
         if (json) {
             pw.print(ResultJson.write(ResultJson.document(r)));
         } else {
-            for (String line : ResultTables.describe(r)) {
-                pw.println(line);
-            }
-            pw.println();
-            pw.print(ResultTables.tableWithWallTime(r).aligned());
-            pw.println();
-            pw.print(RunReport.legend());
-            pw.println();
-            for (String line : VerdictReport.lines(verdicts)) {
-                pw.println(line);
-            }
+            ResultPrinter.print(pw, r, ResultTables.tableWithWallTime(r), verdicts);
         }
         if (out != null) {
             RunReport.write(r, out);

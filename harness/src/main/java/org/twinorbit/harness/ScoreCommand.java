@@ -108,15 +108,7 @@ public final class ScoreCommand implements Callable<Integer> {
         if (json) {
             pw.print(ResultJson.write(ResultJson.document(r)));
         } else {
-            for (String line : ResultTables.describe(r)) {
-                pw.println(line);
-            }
-            pw.println();
-            pw.print(ResultTables.table(r, null).aligned());
-            pw.println();
-            for (String line : VerdictReport.lines(verdicts)) {
-                pw.println(line);
-            }
+            ResultPrinter.print(pw, r, ResultTables.table(r, null), verdicts);
         }
         if (out != null) {
             RunReport.write(r, out);

@@ -12,6 +12,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.twinorbit.harness.report.ResultTables;
+import org.twinorbit.harness.suite.ValidationReport;
 import picocli.CommandLine;
 
 /**
@@ -89,5 +90,13 @@ class ReadmeExcerptTest {
                     .findFirst().orElseThrow(() -> new AssertionError("README shows no table headed " + heading));
             assertEquals(heading, Arrays.asList(shown.split("\\s{2,}")), shown);
         }
+    }
+
+    @Test
+    void theSuiteOverviewHeadingIsTheOneTheCodePrints() throws IOException {
+        String shown = readme().stream().map(String::trim).filter(l -> l.startsWith("case ") && l.contains("species"))
+                .findFirst().orElseThrow();
+        List<String> columns = Arrays.asList(shown.split("\\s{2,}"));
+        assertEquals(ValidationReport.OVERVIEW_HEADER, columns, "README suite overview heading");
     }
 }

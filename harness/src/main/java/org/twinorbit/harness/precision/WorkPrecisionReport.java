@@ -14,6 +14,7 @@ import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.twinorbit.harness.Format;
 import org.twinorbit.harness.report.AtomicFiles;
+import org.twinorbit.harness.report.LogAxes;
 import org.twinorbit.harness.report.Plots;
 import org.twinorbit.harness.report.ResultJson;
 import org.twinorbit.harness.report.TextTable;
@@ -90,8 +91,8 @@ public final class WorkPrecisionReport {
     static XYChart plot(WorkPrecision.Result r) {
         XYChart c = Plots.chart("work and precision, " + r.caseName(), "field evaluations per orbit",
                 "guiding-center position error per bounce / \u03c10 (worst phase)");
-        c.getStyler().setXAxisLogarithmic(true);
-        c.getStyler().setYAxisLogarithmic(true);
+        LogAxes.x(c.getStyler());
+        LogAxes.y(c.getStyler());
         c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideE);
         Set<String> names = new LinkedHashSet<>();
         r.points().forEach(p -> names.add(p.pusher()));
@@ -138,6 +139,8 @@ public final class WorkPrecisionReport {
         } else {
             c.addSeries("no measurable error", new double[] {1}, new double[] {1});
         }
+        LogAxes.range(c, true);
+        LogAxes.range(c, false);
         return c;
     }
 

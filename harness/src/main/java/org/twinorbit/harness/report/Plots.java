@@ -97,7 +97,7 @@ public final class Plots {
      * gyration 0 is the reference value itself: its change is zero by definition)
      */
     private static void timeCurves(XYChart c, List<CaseResult.Curve> curves, String referenceName, double tc, int skip) {
-        c.getStyler().setYAxisLogarithmic(true);
+        LogAxes.y(c.getStyler());
         formatLinear(c, true, Unit.NONE);
         int i = 0;
         int count = curves.size() - 1;
@@ -118,7 +118,7 @@ public final class Plots {
             }
             i++;
         }
-        logRange(c, false);
+        LogAxes.range(c, false);
     }
 
     static XYChart orbit(CaseResult r) {
@@ -177,8 +177,8 @@ public final class Plots {
         }
         XYChart c = chart(r.resolved().spec().name() + ", phase 0: end-position error, " + String.join(", ", spans),
                 "dt / Tc  (each integrator at dt, dt/2, dt/4, dt/8)", "|x(end) \u2212 x_ref(end)| / \u03c10");
-        c.getStyler().setXAxisLogarithmic(true);
-        c.getStyler().setYAxisLogarithmic(true);
+        LogAxes.x(c.getStyler());
+        LogAxes.y(c.getStyler());
         List<ResultRow> shown = new ArrayList<>();
         for (ResultRow row : r.rows()) {
             double[] e = row.convergenceError();
@@ -208,7 +208,8 @@ public final class Plots {
                 guides(c, family, model, floor, tc);
             }
         }
-        logRange(c, true);
+        LogAxes.range(c, false);
+        LogAxes.range(c, true);
         return c;
     }
 
@@ -427,8 +428,8 @@ public final class Plots {
 
     /**
      * A chart in the project's style: white, thin grid, legend outside the plot on the right,
-     * decades only on log axes. (Linear axes get their tick labels from {@link #plain}; a custom
-     * formatter on a log axis would make XChart 3.8 compute linear ticks over many decades.)
+     * decades labelled on log axes. (Linear axes get their tick labels from {@link #plain}; log
+     * axes, made by {@link LogAxes}, from XChart's log formatter with the project's pattern.)
      */
     public static XYChart chart(String title, String x, String y) {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(x).yAxisTitle(y).build();
@@ -438,12 +439,10 @@ public final class Plots {
         c.getStyler().setPlotBackgroundColor(java.awt.Color.WHITE);
         c.getStyler().setLegendBorderColor(new java.awt.Color(0xbbbbbb));
         c.getStyler().setSeriesColors(PALETTE);
-        // solid thin grid lines, decades only on log axes: easier to read, and dashed strokes
+        // solid thin grid lines: easier to read, and dashed strokes
         // across the whole plot cost more time than the curves themselves
         c.getStyler().setPlotGridLinesStroke(new java.awt.BasicStroke(0.6f));
         c.getStyler().setPlotGridLinesColor(new java.awt.Color(0xdddddd));
-        c.getStyler().setXAxisLogarithmicDecadeOnly(true);
-        c.getStyler().setYAxisLogarithmicDecadeOnly(true);
         return c;
     }
 
@@ -464,27 +463,6 @@ public final class Plots {
             c.setCustomXAxisTickLabelsFormatter(f);
         } else {
             c.setCustomYAxisTickLabelsFormatter(f);
-        }
-    }
-
-    /**
-     * Sets a log axis to whole decades around its data, at least one decade apart, so that every
-     * axis has two or more labelled ticks (XChart labels none within one decade otherwise).
-     */
-    private static void logRange(XYChart c, boolean xToo) {
-        double[] y = range(c, false, true);
-        if (y != null) {
-            double lo = Math.floor(Math.log10(y[0]) + 1e-9);
-            double hi = Math.ceil(Math.log10(y[1]) - 1e-9);
-            c.getStyler().setYAxisMin(Math.pow(10, lo)).setYAxisMax(Math.pow(10, Math.max(hi, lo + 1)));
-        }
-        if (xToo) {
-            double[] x = range(c, true, true);
-            if (x != null) {
-                double lo = Math.floor(Math.log10(x[0]) + 1e-9);
-                double hi = Math.ceil(Math.log10(x[1]) - 1e-9);
-                c.getStyler().setXAxisMin(Math.pow(10, lo)).setXAxisMax(Math.pow(10, Math.max(hi, lo + 1)));
-            }
         }
     }
 

@@ -1,6 +1,7 @@
 package org.twinorbit.harness.scan;
 
 import org.twinorbit.harness.report.AtomicFiles;
+import org.twinorbit.harness.report.LogAxes;
 import org.twinorbit.harness.report.ToolInfo;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -311,20 +312,39 @@ public final class SafeUseMap {
                             || row.threshold().outcome() == ThresholdOutcome.EXCEEDED_ONCE_MEASURED,
                     Row::epsMin, SeriesMarkers.TRIANGLE_DOWN);
             if (any) {
-                charts.add(eps);
-                charts.add(energy);
+                charts.add(decades(eps));
+                charts.add(decades(energy));
             }
         }
         return charts;
+    }
+
+    /** The panel with its log axis on the whole decades around its values. */
+    private static CategoryChart decades(CategoryChart c) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (CategorySeries s : c.getSeriesMap().values()) {
+            for (Number v : s.getYData()) {
+                if (v != null && v.doubleValue() > 0 && Double.isFinite(v.doubleValue())) {
+                    lo = Math.min(lo, v.doubleValue());
+                    hi = Math.max(hi, v.doubleValue());
+                }
+            }
+        }
+        LogAxes.range(c.getStyler(), false, lo, hi);
+        return c;
     }
 
     private static CategoryChart panel(String title, String yTitle) {
         CategoryChart c = new CategoryChartBuilder().width(1000).height(560).title(title).xAxisTitle("field")
                 .yAxisTitle(yTitle).build();
         c.getStyler().setDefaultSeriesRenderStyle(CategorySeries.CategorySeriesRenderStyle.Scatter);
-        c.getStyler().setYAxisLogarithmic(true).setLegendPosition(Styler.LegendPosition.OutsideS)
+        LogAxes.y(c.getStyler());
+        c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS)
                 .setLegendLayout(Styler.LegendLayout.Horizontal);
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
+        c.getStyler().setPlotGridLinesStroke(new java.awt.BasicStroke(0.6f));
+        c.getStyler().setPlotGridLinesColor(new java.awt.Color(0xdddddd));
         c.getStyler().setXAxisLabelRotation(30);
         c.getStyler().setMarkerSize(9);
         return c;

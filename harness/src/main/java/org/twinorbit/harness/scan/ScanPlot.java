@@ -1,6 +1,7 @@
 package org.twinorbit.harness.scan;
 
 import org.twinorbit.harness.report.AtomicFiles;
+import org.twinorbit.harness.report.LogAxes;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -96,8 +97,13 @@ public final class ScanPlot {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(m.description())
                 .xAxisTitle(xTitle).yAxisTitle(axisTitle(m) + " (" + statistic + " phase)").build();
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
-        c.getStyler().setXAxisLogarithmic(true).setYAxisLogarithmic(true)
-                .setLegendPosition(Styler.LegendPosition.OutsideS)
+        // solid thin light grid as in the case plots: the dashed default at every minor tick
+        // of several decades greys the panel
+        c.getStyler().setPlotGridLinesStroke(new java.awt.BasicStroke(0.6f));
+        c.getStyler().setPlotGridLinesColor(new java.awt.Color(0xdddddd));
+        LogAxes.x(c.getStyler());
+        LogAxes.y(c.getStyler());
+        c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS)
                 .setLegendLayout(Styler.LegendLayout.Vertical);
         double floor = floor(r, m);
         boolean any = false;
@@ -159,12 +165,8 @@ public final class ScanPlot {
                 }
             }
         }
-        // within two decades XChart would label no tick at all unless every tick is labelled
-        double lo = c.getSeriesMap().values().stream().flatMapToDouble(x -> java.util.Arrays.stream(x.getYData()))
-                .filter(v -> v > 0).min().orElse(1);
-        double hi = c.getSeriesMap().values().stream().flatMapToDouble(x -> java.util.Arrays.stream(x.getYData()))
-                .max().orElse(1);
-        c.getStyler().setYAxisLogarithmicDecadeOnly(hi / lo > 100);
+        LogAxes.range(c, true);
+        LogAxes.range(c, false);
         return c;
     }
 

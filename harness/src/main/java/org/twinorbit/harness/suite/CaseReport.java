@@ -27,7 +27,7 @@ import org.twinorbit.harness.verdict.VerdictReport;
  * @param field    the case's field, which groups the sections of validation.md
  * @param document the case's element of validation.json's {@code cases}
  * @param csvRows  its lines of validation.csv, each ending in a newline
- * @param overview its cells of the overview table, in {@link ValidationReport#OVERVIEW_HEADINGS} order
+ * @param overview its cells of the overview table, in {@link ValidationReport#OVERVIEW_HEADER} order
  * @param section  its section of validation.md without the plot links: heading, description, table
  * @param verdicts its integrator rows' verdicts, the suite's expectations applied
  */
@@ -129,9 +129,9 @@ public record CaseReport(String name, String field, JsonNode document, String cs
         for (JsonNode c : need(root, "overview", JsonNode::isArray)) {
             overview.add(text(c, "overview"));
         }
-        if (overview.size() != ValidationReport.OVERVIEW_HEADINGS.size()) {
+        if (overview.size() != ValidationReport.OVERVIEW_HEADER.size()) {
             throw new IllegalArgumentException("'overview' has " + overview.size() + " cells, not "
-                    + ValidationReport.OVERVIEW_HEADINGS.size());
+                    + ValidationReport.OVERVIEW_HEADER.size());
         }
         List<RowVerdict> verdicts = new ArrayList<>();
         for (JsonNode v : need(root, "verdicts", JsonNode::isArray)) {

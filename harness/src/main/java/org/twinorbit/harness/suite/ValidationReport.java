@@ -32,10 +32,6 @@ public final class ValidationReport {
     private ValidationReport() {}
 
     /** Headings of the overview table. */
-    static final List<String> OVERVIEW_HEADINGS = List.of("case", "species", "eps", "pitch", "class", "boris energy",
-            "boris phase", "boris order", "rk4 energy", "gc-rk4 pos/rho", "model mu change", "model mu jump",
-            "model drift", "model pos/rho", "model bounce", "verdict");
-
     /**
      * Writes every file into dir, rendering plots on {@code threads} threads.
      *
@@ -100,9 +96,17 @@ public final class ValidationReport {
         return out;
     }
 
+    /**
+     * The overview's headings. "center pos/rho" is the error of the gyro-averaged center (the
+     * guiding center), as `center pos err/rho` in the run table.
+     */
+    public static final List<String> OVERVIEW_HEADER = List.of("case", "species", "eps", "pitch", "class",
+            "boris energy", "boris phase", "boris order", "rk4 energy", "gc-rk4 center pos/rho", "model mu change",
+            "model mu jump", "model drift", "model center pos/rho", "model bounce", "verdict");
+
     /** The one-page overview: one line per case with the numbers that matter most. */
     public static TextTable overview(List<CaseReport> reports) {
-        TextTable t = new TextTable(OVERVIEW_HEADINGS);
+        TextTable t = new TextTable(OVERVIEW_HEADER);
         for (CaseReport r : reports) {
             t.add(r.overview());
         }

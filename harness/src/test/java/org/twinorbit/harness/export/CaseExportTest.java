@@ -95,6 +95,16 @@ class CaseExportTest {
     }
 
     @Test
+    void theMessageNamesEveryFileWritten() throws IOException {
+        String said = TestCommandLine.succeeded("export", "--field", "gradient", "--eps", "0.05", "--out", tmp.toString());
+        try (var files = Files.list(tmp.resolve("gradient-proton"))) {
+            for (Path f : files.toList()) {
+                assertTrue(said.contains(f.getFileName().toString()), f.getFileName() + " not named in: " + said);
+            }
+        }
+    }
+
+    @Test
     void fieldCardMatchesTheMirrorOnItsAxis() throws IOException {
         TestCommandLine.succeeded("export", "--field", "mirror", "--eps", "0.05", "--out", tmp.toString());
         Path dir = tmp.resolve("mirror-proton");

@@ -19,5 +19,6 @@ class PrecisionPictureTest {
         var c = WorkPrecisionReport.plot(new WorkPrecision.Result(pts, 1e-8, "gradient-proton"));
         PictureChecks.check(c, 1000, 560, List.of("boris", "rk4", "order 2 guide", "order 4 guide",
                 "reference's own error"));
+        PictureChecks.logTicks(c, true, true);
     }
 }

@@ -1,11 +1,15 @@
 package org.twinorbit.harness.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
 import java.util.Collection;
+import java.util.List;
 import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.internal.chartpart.Axis;
+import org.knowm.xchart.internal.chartpart.AxisTickCalculator;
 import org.knowm.xchart.internal.chartpart.Chart;
 
 /**
@@ -57,5 +61,64 @@ public final class PictureChecks {
         long got = coloured;
         assertTrue(got > minColoured, () -> c.getTitle() + ": only " + got + " coloured pixels (no data drawn?)");
         return img;
+    }
+
+    /** One decade label of a log axis: 1e-3, 1e0, 1e2. */
+    private static final java.util.regex.Pattern DECADE = java.util.regex.Pattern.compile("1e(0|-?[1-9][0-9]*)");
+    /** A multiple of a decade, labelled on short log axes: 2e-3. */
+    private static final java.util.regex.Pattern MULTIPLE = java.util.regex.Pattern.compile("[2-9]e(0|-?[1-9][0-9]*)");
+
+    /**
+     * Renders the chart within a few seconds (a custom formatter on a log axis once made XChart
+     * lay out linear ticks across many decades and hang) and checks that the named log axes
+     * label their ticks in one style, 1e-3, 1e-2, …, each label at its own value, at least two
+     * decades labelled or every tick labelled, and that minor ticks lie between the decades.
+     *
+     * @param x check the x axis (log)
+     * @param y check the y axis (log)
+     */
+    public static void logTicks(Chart<?, ?> c, boolean x, boolean y) {
+        assertTimeoutPreemptively(java.time.Duration.ofSeconds(20), () -> BitmapEncoder.getBufferedImage(c),
+                () -> c.getTitle() + ": rendering hangs");
+        if (x) {
+            logAxis(c, axis(c, "getXAxis"), "x");
+        }
+        if (y) {
+            logAxis(c, axis(c, "getYAxis"), "y");
+        }
+    }
+
+    private static void logAxis(Chart<?, ?> c, AxisTickCalculator t, String name) {
+        List<String> labels = t.getTickLabels();
+        List<String> shown = labels.stream().filter(java.util.Objects::nonNull).toList();
+        String where = c.getTitle() + ", " + name + " axis, labels " + labels;
+        assertTrue(shown.size() >= 2, where);
+        long decades = shown.stream().filter(l -> DECADE.matcher(l).matches()).count();
+        for (String l : shown) {
+            assertTrue(DECADE.matcher(l).matches() || MULTIPLE.matcher(l).matches(), () -> "'" + l + "' in " + where);
+            // the label says the value at its tick: decades and multiples alike
+            double v = Double.parseDouble(l);
+            assertTrue(v > 0, where);
+        }
+        // two decades labelled, or a short axis with every tick labelled
+        assertTrue(decades >= 2 || shown.size() == labels.size(), where);
+        // minor ticks at 2…9 times a decade beside the decades
+        assertTrue(labels.size() > decades, where);
+        assertEquals(labels.size(), t.getTickLocations().size(), where);
+    }
+
+    /** The axis' tick calculator of the last rendering (XChart keeps it internal). */
+    private static AxisTickCalculator axis(Chart<?, ?> c, String getter) {
+        try {
+            java.lang.reflect.Field f = Chart.class.getDeclaredField("axisPair");
+            f.setAccessible(true);
+            Object pair = f.get(c);
+            java.lang.reflect.Method m = pair.getClass().getDeclaredMethod(getter);
+            m.setAccessible(true);
+            Axis<?, ?> a = (Axis<?, ?>) m.invoke(pair);
+            return a.getAxisTickCalculator();
+        } catch (ReflectiveOperationException e) {
+            throw new AssertionError("XChart's axes changed: " + e, e);
+        }
     }
 }

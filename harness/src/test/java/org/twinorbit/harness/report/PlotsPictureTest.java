@@ -50,6 +50,14 @@ class PlotsPictureTest {
     }
 
     @Test
+    void logAxesLabelTheirDecadesInOneStyle() {
+        // the issue: "1E-4" beside "0.001" on one axis
+        PictureChecks.logTicks(Plots.mu(mirror), false, true);
+        PictureChecks.logTicks(Plots.energy(mirror), false, true);
+        PictureChecks.logTicks(Plots.convergence(mirror), true, true);
+    }
+
+    @Test
     void theOrbitOverlayShowsTheIntegratorsNotOnlyTheReferences() {
         XYChart c = Plots.orbit(mirror);
         // the pusher's own gyro-averaged centers, point by point: not the reference's (issue:

@@ -24,6 +24,7 @@ class ScanPicturesTest {
             org.junit.jupiter.api.Assertions.assertTrue(metric.endsWith(" @ 60 deg"), metric);
             org.junit.jupiter.api.Assertions.assertTrue(c.getSeriesMap().keySet().stream()
                     .anyMatch(k -> k.startsWith("tolerance ")), c.getTitle());
+            PictureChecks.logTicks(c, true, true);
         }
         PictureChecks.check(panels.get(0), 640, 600, List.of("mu_jump @ 60 deg", "mu_change (ripple included) @ 60 deg"));
     }
@@ -41,5 +42,7 @@ class ScanPicturesTest {
         org.junit.jupiter.api.Assertions.assertEquals(2, panels.size(), "eps* and energy for protons");
         PictureChecks.check(panels.get(0), 1000, 560, List.of("mu_jump", "not reached"));
         PictureChecks.check(panels.get(1), 1000, 560, List.of("mu_jump"));
+        PictureChecks.logTicks(panels.get(0), false, true);
+        PictureChecks.logTicks(panels.get(1), false, true);
     }
 }

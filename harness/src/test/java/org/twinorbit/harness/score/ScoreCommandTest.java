@@ -121,6 +121,10 @@ class ScoreCommandTest {
                 "--order", "2", "--property", "time-reversible", "--quiet");
         assertEquals(1, o.code(), o.out() + o.err());
         assertTrue(o.out().contains("outside-skewed: energy-trend"), o.out());
+        // the legend of the columns under the table, before the verdicts, as run prints it
+        int lastRow = o.out().indexOf("gc-reference ");
+        int legend = o.out().indexOf("phase err: phi/phi_ref - 1");
+        assertTrue(lastRow > 0 && legend > lastRow && o.out().indexOf("verdicts:") > legend, o.out());
     }
 
     /**
