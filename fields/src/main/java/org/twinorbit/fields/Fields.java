@@ -45,6 +45,14 @@ public final class Fields {
     }
 
     /**
+     * Whether a field name names a file (a grid file or a G-EQDSK file) rather than a field of the
+     * library; such a name has no provider.
+     */
+    public static boolean isFile(String name) {
+        return name.startsWith(GridFile.PREFIX) || name.startsWith(GeqdskFile.PREFIX);
+    }
+
+    /**
      * Builds a field by name with some parameters overridden.
      *
      * @param overrides parameter name -> value in the parameter's unit; unknown names and values

@@ -52,7 +52,7 @@ public final class GridCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         GridSpec grid = GridSpec.parse(geometry, box, nodes);
-        if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+        if (!Fields.isFile(field)) {
             try {
                 Fields.provider(field);
             } catch (FieldParameterException e) {

@@ -69,7 +69,7 @@ public final class ProbeCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new BadInputException("--species: " + e.getMessage());
         }
-        if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+        if (!Fields.isFile(field)) {
             try {
                 Fields.provider(field);
             } catch (FieldParameterException e) {

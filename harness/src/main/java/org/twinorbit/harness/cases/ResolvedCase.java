@@ -33,8 +33,7 @@ public final class ResolvedCase {
     public ResolvedCase(Case c) {
         this.spec = c;
         Species s = c.species();
-        boolean grid = c.field().startsWith(org.twinorbit.fields.GridFile.PREFIX)
-                || c.field().startsWith(org.twinorbit.fields.GeqdskFile.PREFIX);
+        boolean grid = Fields.isFile(c.field());
         if (!grid) {
             try {
                 Fields.provider(c.field());

@@ -66,7 +66,7 @@ public final class ScanRequest {
         }
         ScanField recipe;
         try {
-            if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+            if (!Fields.isFile(field)) {
                 Fields.provider(field);
             }
             recipe = ScanField.of(field);
