@@ -66,7 +66,8 @@ public final class ScanRequest {
         }
         ScanField recipe;
         try {
-            if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)) {
+            if (!field.startsWith(org.twinorbit.fields.GridFile.PREFIX)
+                    && !field.startsWith(org.twinorbit.fields.GeqdskFile.PREFIX)) {
                 Fields.provider(field);
             }
             recipe = ScanField.of(field);
