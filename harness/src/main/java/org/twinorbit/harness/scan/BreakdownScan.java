@@ -20,15 +20,30 @@ import org.twinorbit.harness.run.PhaseStatistic;
  * @param tolerances metric -> tolerances at which to find ε*
  * @param statistic  the summary over the gyrophase ensemble compared with the tolerances; not a
  *                   setting of the points, so a resumed scan may threshold another one
+ * @param chargeSigns [{@link ChargeSigns#GIVEN}], or {@link ChargeSigns#BOTH}: the points are
+ *                   sign-major, then pitch, then increasing ε
  */
 public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Double> pitches, ScanAxis axis,
-                            Map<ScanMetric, List<Double>> tolerances, PhaseStatistic statistic) {
+                            Map<ScanMetric, List<Double>> tolerances, PhaseStatistic statistic,
+                            List<Integer> chargeSigns) {
 
     public BreakdownScan {
         settings = new LinkedHashMap<>(settings);
         eps = eps.clone();
         pitches = List.copyOf(pitches);
         tolerances = new LinkedHashMap<>(tolerances);
+        chargeSigns = List.copyOf(chargeSigns);
+    }
+
+    /** A scan of the species as given. */
+    public BreakdownScan(Map<String, Object> settings, double[] eps, List<Double> pitches, ScanAxis axis,
+                         Map<ScanMetric, List<Double>> tolerances, PhaseStatistic statistic) {
+        this(settings, eps, pitches, axis, tolerances, statistic, List.of(ChargeSigns.GIVEN));
+    }
+
+    /** Number of points: ε values × pitch angles × charge signs. */
+    public int size() {
+        return eps.length * pitches.size() * chargeSigns.size();
     }
 
     /**
@@ -44,16 +59,17 @@ public record BreakdownScan(Map<String, Object> settings, double[] eps, List<Dou
      */
     public ScanResult run(PointEvaluator evaluator, Path out, boolean resume, int pointThreads, ScanProgress progress) {
         ScanCheckpoint cp = ScanCheckpoint.open(out, this, resume);
-        List<ScanPoint> points = ScanRunner.run(eps, pitches, axis, evaluator, cp, pointThreads, progress);
+        List<ScanPoint> points = ScanRunner.run(this, evaluator, cp, pointThreads, progress);
         ScanResult r = result(points);
         ScanOutputs.write(r, out);
         cp.delete();
         return r;
     }
 
-    /** The finished scan of these points (all of them, pitch-major then increasing ε): ε* found. */
+    /** The finished scan of these points (all of them, sign-major, pitch, then increasing ε): ε* found. */
     ScanResult result(List<ScanPoint> points) {
-        return new ScanResult(settings, axis, points, Thresholds.find(points, pitches, tolerances, axis, statistic));
+        return new ScanResult(settings, axis, points,
+                Thresholds.find(points, pitches, chargeSigns, tolerances, axis, statistic));
     }
 
     /** The files of a finished scan, as the messages about them name them. */

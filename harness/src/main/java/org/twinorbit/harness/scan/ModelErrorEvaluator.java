@@ -61,6 +61,8 @@ public final class ModelErrorEvaluator implements PointEvaluator {
     private final List<String> gcIntegrators;
     private final int threads;
     private final GuidingCenterStart gcStart;
+    /** The same scan of the twin of charge -q ({@code --charge-signs both}); null in the twin itself. */
+    private final ModelErrorEvaluator opposite;
     /** Wall time (ns) spent in the full-orbit and guiding-center references, summed over threads. */
     private final java.util.concurrent.atomic.LongAdder fullOrbitNanos = new java.util.concurrent.atomic.LongAdder();
     private final java.util.concurrent.atomic.LongAdder guidingCenterNanos = new java.util.concurrent.atomic.LongAdder();
@@ -79,6 +81,16 @@ public final class ModelErrorEvaluator implements PointEvaluator {
                                int phases, ScanDuration duration, ScanField recipe, double rtol,
                                List<String> pushers, List<String> gcIntegrators, int threads,
                                GuidingCenterStart gcStart) {
+        this(field, parameters, species, start, phases, duration, recipe, rtol, pushers, gcIntegrators, threads, gcStart,
+                true);
+    }
+
+    private ModelErrorEvaluator(String field, Map<String, Double> parameters, Species species, Vec3 start,
+                                int phases, ScanDuration duration, ScanField recipe, double rtol,
+                                List<String> pushers, List<String> gcIntegrators, int threads,
+                                GuidingCenterStart gcStart, boolean withTwin) {
+        this.opposite = withTwin ? new ModelErrorEvaluator(field, parameters, ChargeSigns.species(species, -1), start,
+                phases, duration, recipe, rtol, pushers, gcIntegrators, threads, gcStart, false) : null;
         this.gcStart = gcStart;
         this.field = field;
         this.parameters = new LinkedHashMap<>(parameters);
@@ -107,6 +119,12 @@ public final class ModelErrorEvaluator implements PointEvaluator {
      * drift faster than light) has every error infinite, class change unknown, and
      * {@code point_failed} = 1: the comparison itself breaks down there.
      */
+    @Override
+    public Map<String, Double> measure(double eps, double energyEv, double pitchDeg, int chargeSign) {
+        return chargeSign < 0 && opposite != null ? opposite.measure(eps, energyEv, pitchDeg)
+                : measure(eps, energyEv, pitchDeg);
+    }
+
     @Override
     public Map<String, Double> measure(double eps, double energyEv, double pitchDeg) {
         try {
@@ -215,7 +233,8 @@ public final class ModelErrorEvaluator implements PointEvaluator {
      * result files, which must not depend on the machine.
      */
     public double[] referenceSeconds() {
-        return new double[] {fullOrbitNanos.sum() * 1e-9, guidingCenterNanos.sum() * 1e-9};
+        double[] twin = opposite == null ? new double[2] : opposite.referenceSeconds();
+        return new double[] {fullOrbitNanos.sum() * 1e-9 + twin[0], guidingCenterNanos.sum() * 1e-9 + twin[1]};
     }
 
     /**

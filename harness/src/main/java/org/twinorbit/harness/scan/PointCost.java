@@ -27,7 +27,7 @@ final class PointCost {
 
     private PointCost() {}
 
-    /** The estimated cost (gyroperiod-orbits, relative units) of each point of {@code scan}, pitch-major then ε. */
+    /** The estimated cost (gyroperiod-orbits, relative units) of each point of {@code scan}, sign-major, then pitch, then ε. */
     static double[] of(BreakdownScan scan) {
         Map<String, Object> s = scan.settings();
         double phases = ((Number) s.get("phases")).doubleValue();
@@ -36,7 +36,7 @@ final class PointCost {
         int integrators = ((List<?>) s.get("integrators")).size();
         ScanField recipe = ScanField.of((String) s.get("field"));
         double[] eps = scan.eps();
-        double[] cost = new double[eps.length * scan.pitches().size()];
+        double[] cost = new double[scan.size()];
         for (int k = 0; k < cost.length; k++) {
             double e = eps[k % eps.length];
             double gyroperiods = switch (ScanDuration.Unit.parse(unit)) {

@@ -19,4 +19,18 @@ public interface PointEvaluator {
      *         {@code _mean} and {@code _worst} over the gyrophase ensemble (see {@link ScanMetric})
      */
     Map<String, Double> measure(double eps, double energyEv, double pitchDeg);
+
+    /**
+     * The point for one charge sign ({@link ChargeSigns}): the species as given for
+     * {@link ChargeSigns#GIVEN} and +1, its twin of charge -q for -1. An evaluator that has no
+     * twin measures only the species as given.
+     *
+     * @throws UnsupportedOperationException for -1 when the evaluator has no twin
+     */
+    default Map<String, Double> measure(double eps, double energyEv, double pitchDeg, int chargeSign) {
+        if (chargeSign < 0) {
+            throw new UnsupportedOperationException("this evaluator measures the species as given only");
+        }
+        return measure(eps, energyEv, pitchDeg);
+    }
 }

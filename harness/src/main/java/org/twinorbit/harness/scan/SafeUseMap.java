@@ -120,7 +120,7 @@ public final class SafeUseMap {
      */
     public record Plan(List<ScanRequest.Built> scans, List<String> names, Map<String, String> skipped) {
         int totalPoints() {
-            return scans.stream().mapToInt(b -> b.scan().eps().length * b.scan().pitches().size()).sum();
+            return scans.stream().mapToInt(b -> b.scan().size()).sum();
         }
     }
 

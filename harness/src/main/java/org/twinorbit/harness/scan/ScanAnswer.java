@@ -19,27 +19,35 @@ public final class ScanAnswer {
     /** A limit: ε* (NaN when none inside the range), the energy there (eV, NaN when fixed) and why. */
     record Limit(double epsStar, double energyEv, String because, boolean atStart, boolean lost) {}
 
-    /** The lines: one per pitch, then "overall" when there are several pitches. */
+    /** One line of answers: a pitch angle (degrees) of one charge sign ({@link ChargeSigns}). */
+    private record Line(int sign, double pitchDeg) {}
+
+    /**
+     * The lines: one per pitch (per charge sign and pitch with {@code --charge-signs both}), then
+     * "overall" when there are several, naming the limiting pitch (and sign).
+     */
     public static List<String> lines(ScanResult r) {
-        Set<Double> pitches = new LinkedHashSet<>();
-        r.thresholds().forEach(t -> pitches.add(t.pitchDeg()));
+        Set<Line> lines = new LinkedHashSet<>();
+        r.thresholds().forEach(t -> lines.add(new Line(t.chargeSign(), t.pitchDeg())));
+        String species = String.valueOf(r.settings().get("species"));
         double hiEps = ((Number) r.settings().get("eps_max")).doubleValue();
         boolean energies = r.axis().variesEnergy();
         List<String> out = new ArrayList<>();
         Limit overall = null;
-        double overallPitch = Double.NaN;
-        for (double pitch : pitches) {
-            Limit l = limit(r, pitch);
-            out.add("pitch " + Format.number(pitch) + " deg: " + describe(l, hiEps, r, energies));
+        Line overallLine = null;
+        for (Line line : lines) {
+            Limit l = limit(r, line.pitchDeg(), line.sign());
+            out.add(ChargeSigns.label(species, line.sign(), line.pitchDeg()) + ": " + describe(l, hiEps, r, energies));
             if (!l.lost() && (overall == null || rank(l) < rank(overall))) {
                 overall = l;
-                overallPitch = pitch;
+                overallLine = line;
             }
         }
-        if (pitches.size() > 1) {
+        if (lines.size() > 1) {
             out.add("overall: " + (overall == null ? "every pitch is lost at every point (loss cone)"
-                    : describe(overall, hiEps, r, energies) + (Double.isNaN(overallPitch) ? ""
-                    : ", at pitch " + Format.number(overallPitch) + " deg")));
+                    : describe(overall, hiEps, r, energies) + ", at " + (overallLine.sign() == ChargeSigns.GIVEN
+                    ? "" : (overallLine.sign() < 0 ? species + " (-q)" : species) + " ")
+                    + "pitch " + Format.number(overallLine.pitchDeg()) + " deg"));
         }
         return out;
     }
@@ -49,12 +57,12 @@ public final class ScanAnswer {
         return l.atStart() ? -1 : Double.isNaN(l.epsStar()) ? Double.POSITIVE_INFINITY : l.epsStar();
     }
 
-    static Limit limit(ScanResult r, double pitch) {
+    static Limit limit(ScanResult r, double pitch, int sign) {
         Limit best = new Limit(Double.NaN, Double.NaN, null, false, false);
         boolean allLost = true;
         boolean any = false;
         for (Threshold t : r.thresholds()) {
-            if (t.pitchDeg() != pitch) {
+            if (t.pitchDeg() != pitch || t.chargeSign() != sign) {
                 continue;
             }
             ThresholdOutcome o = t.outcome();

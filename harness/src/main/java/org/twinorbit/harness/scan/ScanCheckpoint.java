@@ -27,10 +27,10 @@ public final class ScanCheckpoint {
     /** Name of the partial-results file in the output directory. */
     public static final String FILE_NAME = "scan.partial.json";
 
-    private record Key(double pitchDeg, double eps) {}
+    private record Key(int chargeSign, double pitchDeg, double eps) {}
 
-    private static final Comparator<Key> ORDER =
-            Comparator.comparingDouble(Key::pitchDeg).thenComparingDouble(Key::eps);
+    private static final Comparator<Key> ORDER = Comparator.comparingInt((Key k) -> -k.chargeSign())
+            .thenComparingDouble(Key::pitchDeg).thenComparingDouble(Key::eps);
 
     private final Path file;
     private final Map<String, Object> settings;
@@ -85,7 +85,8 @@ public final class ScanCheckpoint {
             String where = "point " + (i + 1) + " of " + points.size();
             ScanPoint p;
             try {
-                p = ScanJson.readCheckedPoint(points.get(i), scan.eps(), scan.pitches(), requiredKeys(scan));
+                p = ScanJson.readCheckedPoint(points.get(i), scan.eps(), scan.pitches(), scan.chargeSigns(),
+                        requiredKeys(scan));
             } catch (IllegalArgumentException e) {
                 throw damaged(where + " " + e.getMessage());
             }
@@ -95,8 +96,9 @@ public final class ScanCheckpoint {
                 throw damaged(where + " has the metrics " + keys + " where point 1 has " + metricKeys);
             }
             metricKeys = keys;
-            if (done.put(new Key(p.pitchDeg(), p.eps()), p) != null) {
-                throw damaged(where + " repeats pitch " + p.pitchDeg() + " deg, eps " + p.eps());
+            if (done.put(new Key(p.chargeSign(), p.pitchDeg(), p.eps()), p) != null) {
+                throw damaged(where + " repeats pitch " + p.pitchDeg() + " deg, eps " + p.eps()
+                        + (p.chargeSign() == ChargeSigns.GIVEN ? "" : ", charge sign " + p.chargeSign()));
             }
         }
     }
@@ -139,9 +141,9 @@ public final class ScanCheckpoint {
         }
     }
 
-    /** The saved point at this pitch angle (degrees) and ε, or null. */
-    public synchronized ScanPoint get(double pitchDeg, double eps) {
-        return done.get(new Key(pitchDeg, eps));
+    /** The saved point at this pitch angle (degrees), ε and charge sign ({@link ChargeSigns}), or null. */
+    public synchronized ScanPoint get(double pitchDeg, double eps, int chargeSign) {
+        return done.get(new Key(chargeSign, pitchDeg, eps));
     }
 
     /** Number of points saved. */
@@ -151,7 +153,7 @@ public final class ScanCheckpoint {
 
     /** Saves a finished point: the file is rewritten atomically with it included. */
     public synchronized void add(ScanPoint p) {
-        done.put(new Key(p.pitchDeg(), p.eps()), p);
+        done.put(new Key(p.chargeSign(), p.pitchDeg(), p.eps()), p);
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("scan", settings);
         List<Object> points = new ArrayList<>();

@@ -85,6 +85,12 @@ public final class ScanCommand implements Runnable {
             description = "Largest kinetic energy (eV, or with a unit) instead of --eps-max.")
     Double energyMax;
 
+    @Option(names = "--charge-signs", paramLabel = "SIGNS", description = "given (the species as given) or both: "
+            + "also its twin of the same mass and charge -q, at the same pitches and energies, with answers per sign "
+            + "and pitch; the two differ where the grad-B and curvature drifts' reversal moves the orbit to the other "
+            + "side of its flux surface (tokamaks) (default: ${DEFAULT-VALUE}).")
+    String chargeSigns = "given";
+
     @Option(names = "--start", split = ",", paramLabel = "X,Y,Z", hideParamSyntax = true,
             description = "Initial guiding center in m (default: the field's; r = 0.2 Lm in the mirror's midplane; r = 3 rho0 in the ramp).")
     List<Double> start;
@@ -314,6 +320,7 @@ public final class ScanCommand implements Runnable {
         q.parameters = org.twinorbit.harness.OptionPairs.numbers(params, "--field-param");
         q.species = species();
         q.pitches = pitches;
+        q.chargeSigns = ChargeSigns.parse(chargeSigns);
         q.epsMin = epsMin;
         q.epsMax = epsMax;
         q.allowLong = allowLong;
@@ -374,8 +381,9 @@ public final class ScanCommand implements Runnable {
                     ? (t.outcome() == ThresholdOutcome.CROSSED ? "" : t.outcome().label() + ", ") + "eps* = " + Format.number(t.epsStar())
                     + (Double.isNaN(t.energyEvStar()) ? "" : ", " + Format.energy(t.energyEvStar()))
                     : t.outcome().label();
-            w.printf("%-20s tol %-8s pitch %-5s %s%n", t.metric().key(), Format.number(t.tolerance()),
-                    Format.number(t.pitchDeg()), at);
+            w.printf("%-20s tol %-8s pitch %-5s %s%s%n", t.metric().key(), Format.number(t.tolerance()),
+                    Format.number(t.pitchDeg()), t.chargeSign() == ChargeSigns.GIVEN ? "" : t.chargeSign() > 0 ? "+q  " : "-q  ",
+                    at);
         }
         for (String line : ScanAnswer.lines(r)) {
             w.println(line);

@@ -22,7 +22,8 @@ import org.twinorbit.harness.report.ToolInfo;
  *     the field's parameter names as {@code -P} takes them (e.g. {@code Rm}), every other key is
  *     lower-case snake_case;
  * <li>{@code points}: one object per ε and pitch angle with {@code eps}, {@code energy_ev},
- *     {@code pitch_deg}, for each metric {@code <metric>_mean} (phase mean of the signed error),
+ *     {@code pitch_deg}, with {@code --charge-signs both} {@code charge_sign} (1: the species as
+ *     given, -1: its twin of charge -q; absent otherwise), for each metric {@code <metric>_mean} (phase mean of the signed error),
  *     {@code <metric>_rms} (rms over phases) and {@code <metric>_worst} (largest magnitude) over
  *     the gyrophase ensemble ({@code mu_jump}, {@code mu_change}, {@code drift_error},
  *     {@code position_error_rho}, {@code bounce_period_error}, {@code class_change}), then
@@ -34,8 +35,8 @@ import org.twinorbit.harness.report.ToolInfo;
  *     tighter tolerance), {@code full_orbit_evaluations} and {@code guiding_center_evaluations}
  *     (per orbit), and with {@code --integrators} {@code <integrator>_<metric>_worst} for
  *     mu_change, energy_error and position_error_rho (hyphens of the name as underscores);
- * <li>{@code thresholds}: one per metric, tolerance and pitch angle with {@code metric},
- *     {@code tolerance}, {@code pitch_deg}, {@code eps_star}, {@code energy_ev_star},
+ * <li>{@code thresholds}: one per metric, tolerance and pitch angle (and charge sign) with {@code metric},
+ *     {@code tolerance}, {@code pitch_deg}, {@code charge_sign} (as for points), {@code eps_star}, {@code energy_ev_star},
  *     {@code outcome} ({@code crossed}, {@code not-reached}, {@code exceeded-at-start},
  *     {@code exceeded-once-measured}: not measurable at the smallest eps and beyond tolerance where
  *     first measured, {@code no-data}, {@code lost}: every point of that pitch lost by both models, {@code lost-above}: within
@@ -50,6 +51,9 @@ import org.twinorbit.harness.report.ToolInfo;
 public final class ScanJson {
 
     static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    /** The key of a point's and a threshold's charge sign, present only in a scan of both signs. */
+    static final String CHARGE_SIGN = "charge_sign";
 
     /** The keys of a point that are counts, written as integers. */
     static final Set<String> COUNTS = Set.of("point_failed", "lost", "no_bounce", "full_orbit_evaluations",
@@ -99,6 +103,9 @@ public final class ScanJson {
         m.put("eps", p.eps());
         m.put("energy_ev", p.energyEv());
         m.put("pitch_deg", p.pitchDeg());
+        if (p.chargeSign() != ChargeSigns.GIVEN) {
+            m.put(CHARGE_SIGN, p.chargeSign());
+        }
         for (Map.Entry<String, Double> e : p.values().entrySet()) {
             m.put(e.getKey(), COUNTS.contains(e.getKey()) && !exact ? count(e.getValue()) : number(e.getValue()));
         }
@@ -114,6 +121,15 @@ public final class ScanJson {
      * @throws IllegalArgumentException saying what is wrong, worded to follow "point N"
      */
     static ScanPoint readCheckedPoint(JsonNode n, double[] eps, List<Double> pitches, Set<String> required) {
+        return readCheckedPoint(n, eps, pitches, null, required);
+    }
+
+    /**
+     * As {@link #readCheckedPoint(JsonNode, double[], List, Set)}, with the point's
+     * {@code charge_sign} (absent: {@link ChargeSigns#GIVEN}) among {@code signs} (unless null).
+     */
+    static ScanPoint readCheckedPoint(JsonNode n, double[] eps, List<Double> pitches, List<Integer> signs,
+                                      Set<String> required) {
         if (n == null || !n.isObject()) {
             throw new IllegalArgumentException("is " + kind(n) + ", not an object");
         }
@@ -126,6 +142,16 @@ public final class ScanJson {
         if (pitches != null && !pitches.contains(pitch)) {
             throw new IllegalArgumentException("has pitch_deg " + pitch + ", which is not one of the scan's " + pitches);
         }
+        JsonNode s = n.get(CHARGE_SIGN);
+        if (s != null && !(s.isInt() && (s.asInt() == 1 || s.asInt() == -1))) {
+            throw new IllegalArgumentException("has '" + CHARGE_SIGN + "' = " + s + ", not 1 or -1");
+        }
+        int sign = s == null ? ChargeSigns.GIVEN : s.asInt();
+        if (signs != null && !signs.contains(sign)) {
+            throw new IllegalArgumentException(sign == ChargeSigns.GIVEN ? "has no '" + CHARGE_SIGN
+                    + "', which a scan of both charge signs needs" : "has '" + CHARGE_SIGN + "' = " + sign
+                    + ", but the scan does not scan charge signs");
+        }
         for (String k : required) {
             if (!n.has(k)) {
                 throw new IllegalArgumentException("(eps " + e + ", pitch " + pitch + " deg) has no '" + k
@@ -136,7 +162,7 @@ public final class ScanJson {
         for (Iterator<Map.Entry<String, JsonNode>> it = n.fields(); it.hasNext(); ) {
             Map.Entry<String, JsonNode> entry = it.next();
             String k = entry.getKey();
-            if (!k.equals("eps") && !k.equals("energy_ev") && !k.equals("pitch_deg")) {
+            if (!k.equals("eps") && !k.equals("energy_ev") && !k.equals("pitch_deg") && !k.equals(CHARGE_SIGN)) {
                 JsonNode v = entry.getValue();
                 if (!(v.isNumber() || v.isNull() || v.isTextual() && (v.asText().equals("inf") || v.asText().equals("-inf")))) {
                     throw new IllegalArgumentException("(eps " + e + ", pitch " + pitch + " deg) has '" + k + "' = " + v
@@ -145,7 +171,7 @@ public final class ScanJson {
                 values.put(k, readNumber(v));
             }
         }
-        return new ScanPoint(e, w, pitch, values);
+        return new ScanPoint(e, w, pitch, values, sign);
     }
 
     /** What a JSON value is, for messages: "an object", "an array", "a string", ..., "missing". */
@@ -216,6 +242,9 @@ public final class ScanJson {
         m.put("tolerance", t.tolerance());
         m.put("statistic", t.statistic().key());
         m.put("pitch_deg", t.pitchDeg());
+        if (t.chargeSign() != ChargeSigns.GIVEN) {
+            m.put(CHARGE_SIGN, t.chargeSign());
+        }
         m.put("eps_star", number(t.epsStar()));
         m.put("energy_ev_star", number(t.energyEvStar()));
         if (axis.derivedName() != null) {

@@ -107,11 +107,12 @@ public final class ScanPlot {
                 .setLegendLayout(Styler.LegendLayout.Vertical);
         double floor = floor(r, m);
         boolean any = false;
-        List<Double> pitches = pts.stream().map(ScanPoint::pitchDeg).distinct().toList();
-        for (int pi = 0; pi < pitches.size(); pi++) {
-            double pitch = pitches.get(pi);
+        // one line per pitch angle and charge sign (the sign only with --charge-signs both)
+        List<Line> lines = pts.stream().map(p -> new Line(p.chargeSign(), p.pitchDeg())).distinct().toList();
+        for (int pi = 0; pi < lines.size(); pi++) {
+            Line pitch = lines.get(pi);
             java.awt.Color colour = PITCH_COLOURS[pi % PITCH_COLOURS.length];
-            String at = " @ " + Format.number(pitch) + " deg";
+            String at = pitch.at();
             any |= curve(c, pts, pitch, m.worstKey(), floor, m.key() + at, SeriesLines.SOLID, colour);
             if (m == ScanMetric.MU_JUMP) {
                 any |= curve(c, pts, pitch, ScanMetric.MU_CHANGE.worstKey(), floor, "mu_change (ripple included)" + at,
@@ -141,9 +142,10 @@ public final class ScanPlot {
                 s.setLineStyle(SeriesLines.DASH_DASH);
                 s.setLineColor(java.awt.Color.GRAY);
             }
-            java.awt.Color colour = PITCH_COLOURS[Math.max(0, pitches.indexOf(t.pitchDeg())) % PITCH_COLOURS.length];
+            Line line = new Line(t.chargeSign(), t.pitchDeg());
+            java.awt.Color colour = PITCH_COLOURS[Math.max(0, lines.indexOf(line)) % PITCH_COLOURS.length];
             if (t.outcome().hasEpsStar()) {
-                String label = "\u03b5* = " + Format.number(t.epsStar()) + " @ " + Format.number(t.pitchDeg()) + " deg"
+                String label = "\u03b5* = " + Format.number(t.epsStar()) + line.at()
                         + (r.axis().variesEnergy() && !Double.isNaN(t.energyEvStar()) ? " (" + Format.energy(t.energyEvStar()) + ")" : "")
                         + (t.outcome() == ThresholdOutcome.LOST_ABOVE ? ", lost above" : "");
                 if (!c.getSeriesMap().containsKey(label)) {
@@ -154,7 +156,7 @@ public final class ScanPlot {
                 }
             } else if (t.outcome() != ThresholdOutcome.NO_DATA) {
                 // not-reached, exceeded-at-start, lost: said in the legend, with the pitch's colour
-                String label = t.outcome().label() + " @ " + Format.number(t.pitchDeg()) + " deg";
+                String label = t.outcome().label() + line.at();
                 if (!c.getSeriesMap().containsKey(label)) {
                     double x = t.outcome() == ThresholdOutcome.NOT_REACHED ? epsMax : epsMin;
                     XYSeries s = c.addSeries(label, new double[] {x}, new double[] {t.tolerance()});
@@ -180,14 +182,23 @@ public final class ScanPlot {
         return Double.isNaN(tol) ? 0 : tol * 1e-8;
     }
 
-    /** Adds the finite values above {@code floor} under {@code key} at one pitch; false if none. */
-    private static boolean curve(XYChart c, List<ScanPoint> pts, double pitch, String key, double floor,
+    /** A curve of the plot: one pitch angle (degrees) of one charge sign ({@link ChargeSigns}). */
+    private record Line(int sign, double pitchDeg) {
+        /** The legend's suffix: " @ 60 deg", with both signs " @ 60 deg, +q" or " @ 60 deg, -q". */
+        String at() {
+            return " @ " + Format.number(pitchDeg) + " deg"
+                    + (sign == ChargeSigns.GIVEN ? "" : sign > 0 ? ", +q" : ", -q");
+        }
+    }
+
+    /** Adds the finite values above {@code floor} under {@code key} on one line; false if none. */
+    private static boolean curve(XYChart c, List<ScanPoint> pts, Line pitch, String key, double floor,
                                  String name, java.awt.BasicStroke line, java.awt.Color colour) {
         List<Double> xs = new ArrayList<>();
         List<Double> ys = new ArrayList<>();
         for (ScanPoint p : pts) {
             double v = p.value(key);
-            if (p.pitchDeg() == pitch && v > floor && v > 0 && Double.isFinite(v)) {
+            if (p.pitchDeg() == pitch.pitchDeg() && p.chargeSign() == pitch.sign() && v > floor && v > 0 && Double.isFinite(v)) {
                 xs.add(p.eps());
                 ys.add(v);
             }

@@ -14,11 +14,18 @@ import org.twinorbit.harness.run.PhaseStatistic;
  * @param values   snake_case name -> value: each metric's {@code _mean}, {@code _rms} and
  *                 {@code _worst} (magnitude) over the gyrophase ensemble, plus
  *                 quantities particular to the field (e.g. {@code kappa}); NaN where not measured
+ * @param chargeSign {@link ChargeSigns#GIVEN} (0) in a scan of the species as given; +1 or -1 in a
+ *                 scan of both charge signs: the species as given, or its twin of charge -q
  */
-public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String, Double> values) {
+public record ScanPoint(double eps, double energyEv, double pitchDeg, Map<String, Double> values, int chargeSign) {
 
     public ScanPoint {
         values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+    }
+
+    /** A point of a scan of the species as given (no charge sign scanned). */
+    public ScanPoint(double eps, double energyEv, double pitchDeg, Map<String, Double> values) {
+        this(eps, energyEv, pitchDeg, values, ChargeSigns.GIVEN);
     }
 
     /** The value under {@code key}, NaN when absent. */

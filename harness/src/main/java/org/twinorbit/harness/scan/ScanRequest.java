@@ -25,6 +25,8 @@ public final class ScanRequest {
     public Map<String, Double> parameters = new LinkedHashMap<>();
     public Species species = Species.PROTON;
     public List<Double> pitches;
+    /** [{@link ChargeSigns#GIVEN}] or {@link ChargeSigns#BOTH} ({@code --charge-signs}). */
+    public List<Integer> chargeSigns = List.of(ChargeSigns.GIVEN);
     public Double epsMin;
     public Double epsMax;
     /** Most ε points a scan runs without {@link #allowLong}. */
@@ -195,6 +197,10 @@ public final class ScanRequest {
         settings.put("eps_max", hi);
         settings.put("n_eps", points);
         settings.put("pitch_deg", pitch);
+        if (!chargeSigns.equals(List.of(ChargeSigns.GIVEN))) {
+            // only when asked, so that the settings (and outputs) of a scan of the species as given stay as they were
+            settings.put("charge_signs", "both");
+        }
         settings.put("phases", phases);
         settings.put("duration", d.value());
         settings.put("duration_unit", d.unit().label());
@@ -203,7 +209,7 @@ public final class ScanRequest {
         settings.put("gc_start", gcStart.label());
         ModelErrorEvaluator ev = new ModelErrorEvaluator(field, parameters, species, x0, phases, d, recipe,
                 referenceRtol, pushers, gcs, threads, gcStart);
-        return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances(), statistic), ev);
+        return new Built(new BreakdownScan(settings, eps, pitch, axis, tolerances(), statistic, chargeSigns), ev);
     }
 
     private ScanAxis axis(Field f, ScanField recipe, Vec3 x0, double hi) {

@@ -22,34 +22,33 @@ public final class ScanRunner {
     private ScanRunner() {}
 
     /**
-     * @param eps         the ε grid, increasing
-     * @param pitches     pitch angles (degrees)
-     * @param axis        how ε reads as an energy (and any derived quantity such as κ)
+     * @param scan        the ε grid, pitch angles, charge signs and axis (how ε reads as an energy)
      * @param evaluator   measures one point
      * @param checkpoint  where finished points are saved and resumed from
      * @param threads     worker threads, ≥ 1
      * @param progress    told of every finished point
-     * @return the points, pitch-major then increasing ε
+     * @return the points, sign-major, then pitch, then increasing ε
      */
-    public static List<ScanPoint> run(double[] eps, List<Double> pitches, ScanAxis axis,
-                                      PointEvaluator evaluator, ScanCheckpoint checkpoint,
+    public static List<ScanPoint> run(BreakdownScan scan, PointEvaluator evaluator, ScanCheckpoint checkpoint,
                                       int threads, ScanProgress progress) {
-        return List.of(run(eps, pitches, axis, evaluator, checkpoint, threads, progress, k -> true));
+        return List.of(run(scan, evaluator, checkpoint, threads, progress, k -> true));
     }
 
     /**
      * Runs only the points {@code mine} selects (a shard's part of the scan).
      *
-     * @param mine selects points by their index, pitch-major then increasing ε
+     * @param mine selects points by their index, sign-major, then pitch, then increasing ε
      * @return the points by index, null where not selected
      */
-    static ScanPoint[] run(double[] eps, List<Double> pitches, ScanAxis axis, PointEvaluator evaluator,
-                           ScanCheckpoint checkpoint, int threads, ScanProgress progress,
-                           java.util.function.IntPredicate mine) {
+    static ScanPoint[] run(BreakdownScan scan, PointEvaluator evaluator, ScanCheckpoint checkpoint, int threads,
+                           ScanProgress progress, java.util.function.IntPredicate mine) {
         if (threads < 1) {
             throw new IllegalArgumentException("--threads must be at least 1, got " + threads);
         }
-        int total = eps.length * pitches.size();
+        double[] eps = scan.eps();
+        List<Double> pitches = scan.pitches();
+        ScanAxis axis = scan.axis();
+        int total = scan.size();
         ScanPoint[] out = new ScanPoint[total];
         List<Integer> pending = new ArrayList<>();
         int selected = 0;
@@ -58,7 +57,7 @@ public final class ScanRunner {
                 continue;
             }
             selected++;
-            ScanPoint saved = checkpoint.get(pitches.get(k / eps.length), eps[k % eps.length]);
+            ScanPoint saved = checkpoint.get(pitchOf(scan, k), eps[k % eps.length], signOf(scan, k));
             if (saved != null) {
                 out[k] = saved;
             } else {
@@ -71,9 +70,10 @@ public final class ScanRunner {
             List<Future<?>> futures = new ArrayList<>();
             for (int k : pending) {
                 double e = eps[k % eps.length];
-                double pitch = pitches.get(k / eps.length);
+                double pitch = pitchOf(scan, k);
+                int sign = signOf(scan, k);
                 futures.add(pool.submit(() -> {
-                    ScanPoint p = measure(e, pitch, axis, evaluator);
+                    ScanPoint p = measure(e, pitch, sign, axis, evaluator);
                     checkpoint.add(p);
                     out[k] = p;
                     progress.pointDone();
@@ -99,13 +99,23 @@ public final class ScanRunner {
         return out;
     }
 
-    private static ScanPoint measure(double eps, double pitch, ScanAxis axis, PointEvaluator evaluator) {
+    /** The pitch angle (degrees) of point {@code k}, sign-major, then pitch, then ε. */
+    static double pitchOf(BreakdownScan scan, int k) {
+        return scan.pitches().get(k / scan.eps().length % scan.pitches().size());
+    }
+
+    /** The charge sign of point {@code k}. */
+    static int signOf(BreakdownScan scan, int k) {
+        return scan.chargeSigns().get(k / (scan.eps().length * scan.pitches().size()));
+    }
+
+    private static ScanPoint measure(double eps, double pitch, int sign, ScanAxis axis, PointEvaluator evaluator) {
         double energy = axis.energyEv().applyAsDouble(eps);
         Map<String, Double> values = new LinkedHashMap<>();
         if (axis.derivedName() != null) {
             values.put(axis.derivedName(), axis.derived().applyAsDouble(eps));
         }
-        values.putAll(evaluator.measure(eps, energy, pitch));
-        return new ScanPoint(eps, energy, pitch, values);
+        values.putAll(evaluator.measure(eps, energy, pitch, sign));
+        return new ScanPoint(eps, energy, pitch, values, sign);
     }
 }

@@ -15,6 +15,9 @@ public final class ScanTables {
     /** Column names of the points table: ε, energy, pitch, then every value of the points. */
     static List<String> columns(ScanResult r) {
         List<String> cols = new ArrayList<>(List.of("eps", "energy_ev", "pitch_deg"));
+        if (signed(r)) {
+            cols.add(ScanJson.CHARGE_SIGN);
+        }
         for (ScanPoint p : r.points()) {
             for (String k : p.values().keySet()) {
                 if (!cols.contains(k)) {
@@ -30,6 +33,7 @@ public final class ScanTables {
             case "eps" -> p.eps();
             case "energy_ev" -> p.energyEv();
             case "pitch_deg" -> p.pitchDeg();
+            case ScanJson.CHARGE_SIGN -> p.chargeSign();
             default -> p.value(col);
         };
     }
@@ -91,14 +95,19 @@ public final class ScanTables {
         sb.append('\n');
         sb.append("## Thresholds\n\n");
         String derived = r.axis().derivedName();
-        sb.append("| metric | tolerance | statistic | pitch (deg) | outcome | eps* | energy at eps* (eV) |")
+        boolean signed = signed(r);
+        sb.append("| metric | tolerance | statistic | pitch (deg) |").append(signed ? " charge |" : "")
+                .append(" outcome | eps* | energy at eps* (eV) |")
                 .append(derived == null ? "" : " " + derived + "* |").append('\n');
-        sb.append("|---|---|---|---|---|---|---|").append(derived == null ? "" : "---|").append('\n');
+        sb.append("|---|---|---|---|---|---|---|").append(signed ? "---|" : "").append(derived == null ? "" : "---|")
+                .append('\n');
         for (Threshold t : r.thresholds()) {
             boolean crossed = t.outcome().hasEpsStar();
             sb.append("| ").append(t.metric().key()).append(" | ").append(Format.number(t.tolerance()))
                     .append(" | ").append(t.statistic().key())
-                    .append(" | ").append(Format.number(t.pitchDeg())).append(" | ").append(t.outcome().label())
+                    .append(" | ").append(Format.number(t.pitchDeg()))
+                    .append(signed ? " | " + (t.chargeSign() < 0 ? "-q" : "+q") : "")
+                    .append(" | ").append(t.outcome().label())
                     .append(" | ").append(crossed ? Format.number(t.epsStar()) : "—")
                     .append(" | ").append(crossed && r.axis().variesEnergy() ? Format.number(t.energyEvStar()) : "—")
                     .append(" |");
@@ -123,6 +132,11 @@ public final class ScanTables {
             sb.append('\n');
         }
         return sb.toString();
+    }
+
+    /** True for a scan of both charge signs ({@code --charge-signs both}). */
+    static boolean signed(ScanResult r) {
+        return r.points().stream().anyMatch(p -> p.chargeSign() != ChargeSigns.GIVEN);
     }
 
     private static String show(Object v) {

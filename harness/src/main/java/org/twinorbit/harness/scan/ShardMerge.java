@@ -209,7 +209,8 @@ public final class ShardMerge {
     private static Joined join(BreakdownScan scan, String name, Map<Integer, ShardFile> files) {
         double[] eps = scan.eps();
         List<Double> pitches = scan.pitches();
-        ScanPoint[] all = new ScanPoint[eps.length * pitches.size()];
+        List<Integer> signs = scan.chargeSigns();
+        ScanPoint[] all = new ScanPoint[scan.size()];
         int[] from = new int[all.length];
         JsonNode settings = ScanJson.MAPPER.valueToTree(scan.settings());
         String failed = null;
@@ -228,11 +229,12 @@ public final class ShardMerge {
             for (ScanPoint p : part.points()) {
                 int e = indexOf(eps, p.eps());
                 int q = pitches.indexOf(p.pitchDeg());
-                if (e < 0 || q < 0) {
+                int g = signs.indexOf(p.chargeSign());
+                if (e < 0 || q < 0 || g < 0) {
                     throw new IllegalArgumentException("merge: shard " + f.getKey() + " holds a point of scan " + name
                             + " (eps " + p.eps() + ", pitch " + p.pitchDeg() + " deg) off the scan's grid; run that shard again");
                 }
-                int k = q * eps.length + e;
+                int k = (g * pitches.size() + q) * eps.length + e;
                 if (all[k] != null) {
                     throw new IllegalArgumentException("merge: shards " + from[k] + " and " + f.getKey() + " both hold the "
                             + "point eps " + p.eps() + ", pitch " + p.pitchDeg() + " deg of scan " + name
@@ -248,7 +250,8 @@ public final class ShardMerge {
         for (int k = 0; k < all.length; k++) {
             if (all[k] == null) {
                 throw new IllegalArgumentException("merge: no shard holds the point eps " + eps[k % eps.length] + ", pitch "
-                        + pitches.get(k / eps.length) + " deg of scan " + name + "; the shards were not cut by one rule: "
+                        + ScanRunner.pitchOf(scan, k) + " deg" + (signs.size() > 1 ? ", charge sign "
+                        + ScanRunner.signOf(scan, k) : "") + " of scan " + name + "; the shards were not cut by one rule: "
                         + "run them again with one build");
             }
         }

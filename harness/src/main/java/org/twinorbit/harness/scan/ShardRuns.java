@@ -90,7 +90,7 @@ public final class ShardRuns {
             ScanRequest.Built b = plan.scans().get(i);
             String name = plan.names().get(i);
             parts.add(part(b, name, folder.resolve(name), part, at, shard, resume, threads, overall, true));
-            at += b.scan().eps().length * b.scan().pitches().size();
+            at += b.scan().size();
         }
         return parts;
     }
@@ -121,7 +121,7 @@ public final class ShardRuns {
         }
         try {
             ScanCheckpoint cp = ScanCheckpoint.open(dir, s, resume);
-            ScanPoint[] points = ScanRunner.run(s.eps(), s.pitches(), s.axis(), b.evaluator(), cp, threads, progress,
+            ScanPoint[] points = ScanRunner.run(s, b.evaluator(), cp, threads, progress,
                     k -> part[offset + k] == shard.index());
             List<ScanPoint> mine = new ArrayList<>();
             for (ScanPoint p : points) {

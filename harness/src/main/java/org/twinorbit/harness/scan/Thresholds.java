@@ -20,33 +20,45 @@ public final class Thresholds {
     public static List<Threshold> find(List<ScanPoint> points, List<Double> pitches,
                                        Map<ScanMetric, List<Double>> tolerances, ScanAxis axis,
                                        PhaseStatistic statistic) {
+        return find(points, pitches, List.of(ChargeSigns.GIVEN), tolerances, axis, statistic);
+    }
+
+    /**
+     * As {@link #find(List, List, Map, ScanAxis, PhaseStatistic)}, for every charge sign scanned
+     * ({@link ChargeSigns}): sign-major, then metric, tolerance and pitch.
+     */
+    public static List<Threshold> find(List<ScanPoint> points, List<Double> pitches, List<Integer> signs,
+                                       Map<ScanMetric, List<Double>> tolerances, ScanAxis axis,
+                                       PhaseStatistic statistic) {
         List<Threshold> out = new ArrayList<>();
-        for (Map.Entry<ScanMetric, List<Double>> e : tolerances.entrySet()) {
-            ScanMetric m = e.getKey();
-            for (double tol : e.getValue()) {
-                for (double pitch : pitches) {
-                    List<ScanPoint> curve = points.stream().filter(p -> p.pitchDeg() == pitch)
-                            .sorted((a, b) -> Double.compare(a.eps(), b.eps())).toList();
-                    double[] eps = curve.stream().mapToDouble(ScanPoint::eps).toArray();
-                    // a point lost by both models (a loss cone) measures no breakdown: only the
-                    // class comparison applies there
-                    boolean classes = m == ScanMetric.CLASS_CHANGE;
-                    double[] error = curve.stream()
-                            .mapToDouble(p -> classes || !lost(p) ? p.magnitude(m, statistic) : Double.NaN).toArray();
-                    boolean allLost = !curve.isEmpty() && curve.stream().allMatch(Thresholds::lost);
-                    ThresholdFinder.Crossing c = allLost && !classes
-                            ? new ThresholdFinder.Crossing(ThresholdOutcome.LOST, Double.NaN)
-                            : ThresholdFinder.find(eps, error, tol);
-                    double firstLost = curve.stream().filter(Thresholds::lost).mapToDouble(ScanPoint::eps)
-                            .min().orElse(Double.NaN);
-                    if (!classes && c.outcome() == ThresholdOutcome.NOT_REACHED && !Double.isNaN(firstLost)) {
-                        // "safe over the whole range" would hide that the particle escapes above firstLost
-                        c = new ThresholdFinder.Crossing(ThresholdOutcome.LOST_ABOVE, firstLost);
+        for (int sign : signs) {
+            for (Map.Entry<ScanMetric, List<Double>> e : tolerances.entrySet()) {
+                ScanMetric m = e.getKey();
+                for (double tol : e.getValue()) {
+                    for (double pitch : pitches) {
+                        List<ScanPoint> curve = points.stream().filter(p -> p.pitchDeg() == pitch && p.chargeSign() == sign)
+                                .sorted((a, b) -> Double.compare(a.eps(), b.eps())).toList();
+                        double[] eps = curve.stream().mapToDouble(ScanPoint::eps).toArray();
+                        // a point lost by both models (a loss cone) measures no breakdown: only the
+                        // class comparison applies there
+                        boolean classes = m == ScanMetric.CLASS_CHANGE;
+                        double[] error = curve.stream()
+                                .mapToDouble(p -> classes || !lost(p) ? p.magnitude(m, statistic) : Double.NaN).toArray();
+                        boolean allLost = !curve.isEmpty() && curve.stream().allMatch(Thresholds::lost);
+                        ThresholdFinder.Crossing c = allLost && !classes
+                                ? new ThresholdFinder.Crossing(ThresholdOutcome.LOST, Double.NaN)
+                                : ThresholdFinder.find(eps, error, tol);
+                        double firstLost = curve.stream().filter(Thresholds::lost).mapToDouble(ScanPoint::eps)
+                                .min().orElse(Double.NaN);
+                        if (!classes && c.outcome() == ThresholdOutcome.NOT_REACHED && !Double.isNaN(firstLost)) {
+                            // "safe over the whole range" would hide that the particle escapes above firstLost
+                            c = new ThresholdFinder.Crossing(ThresholdOutcome.LOST_ABOVE, firstLost);
+                        }
+                        boolean hasEps = c.outcome() == ThresholdOutcome.CROSSED || c.outcome() == ThresholdOutcome.LOST_ABOVE;
+                        double energy = hasEps && axis.variesEnergy()
+                                ? axis.energyEv().applyAsDouble(c.epsStar()) : Double.NaN;
+                        out.add(new Threshold(m, tol, statistic, pitch, c.outcome(), c.epsStar(), energy, sign));
                     }
-                    boolean hasEps = c.outcome() == ThresholdOutcome.CROSSED || c.outcome() == ThresholdOutcome.LOST_ABOVE;
-                    double energy = hasEps && axis.variesEnergy()
-                            ? axis.energyEv().applyAsDouble(c.epsStar()) : Double.NaN;
-                    out.add(new Threshold(m, tol, statistic, pitch, c.outcome(), c.epsStar(), energy));
                 }
             }
         }
