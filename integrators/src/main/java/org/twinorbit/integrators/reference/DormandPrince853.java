@@ -156,36 +156,64 @@ final class DormandPrince853 {
     private static final double D1614 = 157882067000.0 / 53564469831.0;
     private static final double D1615 = -290468882375.0 / 31741908048.0;
 
-    /** Weights of the 4th to 7th coefficient of the dense-output polynomial, on stages 1, 6–16. */
-    private static final double[][] P = {
-        {-17751989329.0 / 2106076560.0, 4272954039.0 / 7539864640.0, -118476319744.0 / 38604839385.0,
-            755123450731.0 / 316657731600.0, 3692384461234828125.0 / 1744130441634250432.0,
-            -4612609375.0 / 5293382976.0, 2091772278379.0 / 933644586600.0, 2136624137.0 / 3382989120.0,
-            -126493.0 / 1421424.0, 98350000.0 / 5419179.0, -18878125.0 / 2053168.0,
-            -1944542619.0 / 438351368.0},
-        {32941697297.0 / 3159114840.0, 456696183123.0 / 1884966160.0, 19132610714624.0 / 115814518155.0,
-            -177904688592943.0 / 474986597400.0, -4821139941836765625.0 / 218016305204281304.0,
-            30702015625.0 / 3970037232.0, -85916079474274.0 / 2800933759800.0, -5919468007.0 / 634310460.0,
-            2479159.0 / 157936.0, -18750000.0 / 602131.0, -19203125.0 / 2053168.0,
-            15700361463.0 / 438351368.0},
-        {12627015655.0 / 631822968.0, -72955222965.0 / 188496616.0, -13145744952320.0 / 69488710893.0,
-            30084216194513.0 / 56998391688.0, -296858761006640625.0 / 25648977082856624.0,
-            569140625.0 / 82709109.0, -18684190637.0 / 18672891732.0, 69644045.0 / 89549712.0,
-            -11847025.0 / 4264272.0, -978650000.0 / 16257537.0, 519371875.0 / 6159504.0,
-            5256837225.0 / 438351368.0},
-        {-450944925.0 / 17550638.0, -14532122925.0 / 94248308.0, -595876966400.0 / 2573655959.0,
-            188748653015.0 / 527762886.0, 2545485458115234375.0 / 27252038150535163.0,
-            -1376953125.0 / 36759604.0, 53995596795.0 / 518691437.0, 210311225.0 / 7047894.0,
-            -1718875.0 / 39484.0, 58000000.0 / 602131.0, -1546875.0 / 39484.0,
-            -1262172375.0 / 8429834.0}
-    };
+    // weights of the 4th to 7th coefficient of the dense-output polynomial on stages 1, 6–16
+    private static final double P4_1 = -17751989329.0 / 2106076560.0;
+    private static final double P4_6 = 4272954039.0 / 7539864640.0;
+    private static final double P4_7 = -118476319744.0 / 38604839385.0;
+    private static final double P4_8 = 755123450731.0 / 316657731600.0;
+    private static final double P4_9 = 3692384461234828125.0 / 1744130441634250432.0;
+    private static final double P4_10 = -4612609375.0 / 5293382976.0;
+    private static final double P4_11 = 2091772278379.0 / 933644586600.0;
+    private static final double P4_12 = 2136624137.0 / 3382989120.0;
+    private static final double P4_13 = -126493.0 / 1421424.0;
+    private static final double P4_14 = 98350000.0 / 5419179.0;
+    private static final double P4_15 = -18878125.0 / 2053168.0;
+    private static final double P4_16 = -1944542619.0 / 438351368.0;
+    private static final double P5_1 = 32941697297.0 / 3159114840.0;
+    private static final double P5_6 = 456696183123.0 / 1884966160.0;
+    private static final double P5_7 = 19132610714624.0 / 115814518155.0;
+    private static final double P5_8 = -177904688592943.0 / 474986597400.0;
+    private static final double P5_9 = -4821139941836765625.0 / 218016305204281304.0;
+    private static final double P5_10 = 30702015625.0 / 3970037232.0;
+    private static final double P5_11 = -85916079474274.0 / 2800933759800.0;
+    private static final double P5_12 = -5919468007.0 / 634310460.0;
+    private static final double P5_13 = 2479159.0 / 157936.0;
+    private static final double P5_14 = -18750000.0 / 602131.0;
+    private static final double P5_15 = -19203125.0 / 2053168.0;
+    private static final double P5_16 = 15700361463.0 / 438351368.0;
+    private static final double P6_1 = 12627015655.0 / 631822968.0;
+    private static final double P6_6 = -72955222965.0 / 188496616.0;
+    private static final double P6_7 = -13145744952320.0 / 69488710893.0;
+    private static final double P6_8 = 30084216194513.0 / 56998391688.0;
+    private static final double P6_9 = -296858761006640625.0 / 25648977082856624.0;
+    private static final double P6_10 = 569140625.0 / 82709109.0;
+    private static final double P6_11 = -18684190637.0 / 18672891732.0;
+    private static final double P6_12 = 69644045.0 / 89549712.0;
+    private static final double P6_13 = -11847025.0 / 4264272.0;
+    private static final double P6_14 = -978650000.0 / 16257537.0;
+    private static final double P6_15 = 519371875.0 / 6159504.0;
+    private static final double P6_16 = 5256837225.0 / 438351368.0;
+    private static final double P7_1 = -450944925.0 / 17550638.0;
+    private static final double P7_6 = -14532122925.0 / 94248308.0;
+    private static final double P7_7 = -595876966400.0 / 2573655959.0;
+    private static final double P7_8 = 188748653015.0 / 527762886.0;
+    private static final double P7_9 = 2545485458115234375.0 / 27252038150535163.0;
+    private static final double P7_10 = -1376953125.0 / 36759604.0;
+    private static final double P7_11 = 53995596795.0 / 518691437.0;
+    private static final double P7_12 = 210311225.0 / 7047894.0;
+    private static final double P7_13 = -1718875.0 / 39484.0;
+    private static final double P7_14 = 58000000.0 / 602131.0;
+    private static final double P7_15 = -1546875.0 / 39484.0;
+    private static final double P7_16 = -1262172375.0 / 8429834.0;
 
     private static final double SAFETY = 0.9;
     private static final double MIN_REDUCTION = 0.2;
     private static final double MAX_GROWTH = 10.0;
     private static final double EXPONENT = -1.0 / 8;
 
-    private final int n;
+    /** State size: the Lorentz state (x, u). A constant, so that the compiler unrolls every loop. */
+    static final int N = 6;
+
     private final Derivatives f;
     private final double[] atol;
     private final double[] rtol;
@@ -197,7 +225,8 @@ final class DormandPrince853 {
     private final double[] y0;
     private final double[] y1;
     private final double[] tmp;
-    private final double[][] v;
+    /** Coefficients of the dense-output polynomial of the last step. */
+    private final double[] v0, v1, v2, v3, v4, v5, v6;
 
     private double tEnd;
     /** Start and end (s) of the last accepted step. */
@@ -208,39 +237,45 @@ final class DormandPrince853 {
     private boolean denseReady;
 
     /**
-     * @param dimension state size
      * @param absoluteTolerance per component (units of the component)
      * @param relativeTolerance per component
      * @param maxStep largest step (s)
      */
-    DormandPrince853(int dimension, Derivatives f, double[] absoluteTolerance, double[] relativeTolerance,
-                     double maxStep) {
-        this.n = dimension;
+    DormandPrince853(Derivatives f, double[] absoluteTolerance, double[] relativeTolerance, double maxStep) {
+        if (absoluteTolerance.length != N || relativeTolerance.length != N) {
+            throw new IllegalArgumentException("tolerances must have " + N + " components");
+        }
         this.f = f;
         this.atol = absoluteTolerance.clone();
         this.rtol = relativeTolerance.clone();
         this.maxStep = Math.abs(maxStep);
-        k1 = new double[n];
-        k2 = new double[n];
-        k3 = new double[n];
-        k4 = new double[n];
-        k5 = new double[n];
-        k6 = new double[n];
-        k7 = new double[n];
-        k8 = new double[n];
-        k9 = new double[n];
-        k10 = new double[n];
-        k11 = new double[n];
-        k12 = new double[n];
-        k13 = new double[n];
-        k14 = new double[n];
-        k15 = new double[n];
-        k16 = new double[n];
-        first = new double[n];
-        y0 = new double[n];
-        y1 = new double[n];
-        tmp = new double[n];
-        v = new double[7][n];
+        k1 = new double[N];
+        k2 = new double[N];
+        k3 = new double[N];
+        k4 = new double[N];
+        k5 = new double[N];
+        k6 = new double[N];
+        k7 = new double[N];
+        k8 = new double[N];
+        k9 = new double[N];
+        k10 = new double[N];
+        k11 = new double[N];
+        k12 = new double[N];
+        k13 = new double[N];
+        k14 = new double[N];
+        k15 = new double[N];
+        k16 = new double[N];
+        first = new double[N];
+        y0 = new double[N];
+        y1 = new double[N];
+        tmp = new double[N];
+        v0 = new double[N];
+        v1 = new double[N];
+        v2 = new double[N];
+        v3 = new double[N];
+        v4 = new double[N];
+        v5 = new double[N];
+        v6 = new double[N];
     }
 
     /**
@@ -254,7 +289,7 @@ final class DormandPrince853 {
             throw new IllegalArgumentException("integration span " + (tEnd - t0) + " s is too short");
         }
         this.tEnd = tEnd;
-        System.arraycopy(y, 0, y1, 0, n);
+        System.arraycopy(y, 0, y1, 0, N);
         tPrev = t0;
         tCur = t0;
         f.compute(t0, y1, k1);
@@ -266,10 +301,10 @@ final class DormandPrince853 {
      * h with h⁸ max(‖f‖, ‖f'‖) = 0.01, at most 100 times the trial, within (0, maxStep].
      */
     private double startingStep(double t0) {
-        double[] scale = v[0];
+        double[] scale = v0;
         double yNorm2 = 0;
         double fNorm2 = 0;
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             scale[j] = atol[j] + rtol[j] * Math.abs(y1[j]);
             double r = y1[j] / scale[j];
             yNorm2 += r * r;
@@ -277,12 +312,12 @@ final class DormandPrince853 {
             fNorm2 += r * r;
         }
         double h = (yNorm2 < 1.0e-10 || fNorm2 < 1.0e-10) ? 1.0e-6 : 0.01 * Math.sqrt(yNorm2 / fNorm2);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             tmp[j] = y1[j] + h * k1[j];
         }
         f.compute(t0 + h, tmp, k2);
         double d2 = 0;
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             double r = (k2[j] - k1[j]) / scale[j];
             d2 += r * r;
         }
@@ -296,7 +331,7 @@ final class DormandPrince853 {
 
     /** Takes one accepted step; afterwards [{@link #previousTime}, {@link #currentTime}] is that step. */
     void step() {
-        System.arraycopy(y1, 0, y0, 0, n);
+        System.arraycopy(y1, 0, y0, 0, N);
         double t = tCur;
         double h;
         double error;
@@ -312,8 +347,8 @@ final class DormandPrince853 {
             }
         } while (error >= 1.0);
         // k13 = f(t + h, y1) is the first stage of the next step
-        System.arraycopy(k1, 0, first, 0, n);
-        System.arraycopy(k13, 0, k1, 0, n);
+        System.arraycopy(k1, 0, first, 0, N);
+        System.arraycopy(k13, 0, k1, 0, N);
         tPrev = t;
         tCur = t + h;
         denseReady = false;
@@ -330,54 +365,54 @@ final class DormandPrince853 {
     private void attempt(double t, double h) {
         double[] y = y0;
         double[] s = tmp;
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A21 * k1[j]);
         }
         f.compute(t + C2 * h, s, k2);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A31 * k1[j] + A32 * k2[j]);
         }
         f.compute(t + C3 * h, s, k3);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A41 * k1[j] + A43 * k3[j]);
         }
         f.compute(t + C4 * h, s, k4);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A51 * k1[j] + A53 * k3[j] + A54 * k4[j]);
         }
         f.compute(t + C5 * h, s, k5);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A61 * k1[j] + A64 * k4[j] + A65 * k5[j]);
         }
         f.compute(t + C6 * h, s, k6);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A71 * k1[j] + A74 * k4[j] + A75 * k5[j] + A76 * k6[j]);
         }
         f.compute(t + C7 * h, s, k7);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A81 * k1[j] + A84 * k4[j] + A85 * k5[j] + A86 * k6[j] + A87 * k7[j]);
         }
         f.compute(t + C8 * h, s, k8);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A91 * k1[j] + A94 * k4[j] + A95 * k5[j] + A96 * k6[j] + A97 * k7[j] + A98 * k8[j]);
         }
         f.compute(t + C9 * h, s, k9);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A101 * k1[j] + A104 * k4[j] + A105 * k5[j] + A106 * k6[j] + A107 * k7[j]
                     + A108 * k8[j] + A109 * k9[j]);
         }
         f.compute(t + C10 * h, s, k10);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A111 * k1[j] + A114 * k4[j] + A115 * k5[j] + A116 * k6[j] + A117 * k7[j]
                     + A118 * k8[j] + A119 * k9[j] + A1110 * k10[j]);
         }
         f.compute(t + C11 * h, s, k11);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y[j] + h * (A121 * k1[j] + A124 * k4[j] + A125 * k5[j] + A126 * k6[j] + A127 * k7[j]
                     + A128 * k8[j] + A129 * k9[j] + A1210 * k10[j] + A1211 * k11[j]);
         }
         f.compute(t + h, s, k12);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             y1[j] = y[j] + h * (B1 * k1[j] + B6 * k6[j] + B7 * k7[j] + B8 * k8[j] + B9 * k9[j] + B10 * k10[j]
                     + B11 * k11[j] + B12 * k12[j]);
         }
@@ -391,7 +426,7 @@ final class DormandPrince853 {
     private double error(double h) {
         double e1 = 0;
         double e2 = 0;
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             double s1 = E101 * k1[j] + E106 * k6[j] + E107 * k7[j] + E108 * k8[j] + E109 * k9[j] + E110 * k10[j]
                     + E111 * k11[j] + E112 * k12[j];
             double s2 = E201 * k1[j] + E206 * k6[j] + E207 * k7[j] + E208 * k8[j] + E209 * k9[j] + E210 * k10[j]
@@ -406,7 +441,7 @@ final class DormandPrince853 {
         if (den <= 0.0) {
             den = 1.0;
         }
-        return Math.abs(h) * e1 / Math.sqrt(n * den);
+        return Math.abs(h) * e1 / Math.sqrt(N * den);
     }
 
     /** Start (s) of the last accepted step. */
@@ -436,7 +471,7 @@ final class DormandPrince853 {
     void interpolate(double t, double[] out) {
         if (t == tCur) {
             // the formula gives y1 exactly there; no need for the extra stages
-            System.arraycopy(y1, 0, out, 0, n);
+            System.arraycopy(y1, 0, out, 0, N);
             return;
         }
         if (!denseReady) {
@@ -446,14 +481,13 @@ final class DormandPrince853 {
         double oneMinusThetaH = tCur - t;
         double theta = h == 0 ? 0 : (h - oneMinusThetaH) / h;
         double eta = 1 - theta;
-        double[] v0 = v[0], v1 = v[1], v2 = v[2], v3 = v[3], v4 = v[4], v5 = v[5], v6 = v[6];
         if (theta <= 0.5) {
-            for (int i = 0; i < n; i++) {
+            for (int i = 0; i < N; i++) {
                 out[i] = y0[i] + theta * h * (v0[i] + eta * (v1[i] + theta * (v2[i] + eta * (v3[i]
                         + theta * (v4[i] + eta * (v5[i] + theta * v6[i]))))));
             }
         } else {
-            for (int i = 0; i < n; i++) {
+            for (int i = 0; i < N; i++) {
                 out[i] = y1[i] - oneMinusThetaH * (v0[i] - theta * (v1[i] + theta * (v2[i] + eta * (v3[i]
                         + theta * (v4[i] + eta * (v5[i] + theta * v6[i]))))));
             }
@@ -464,35 +498,41 @@ final class DormandPrince853 {
     private void prepareDense() {
         double h = tCur - tPrev;
         double[] s = tmp;
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y1[j] + h * (D1401 * first[j] + D1406 * k6[j] + D1407 * k7[j] + D1408 * k8[j] + D1409 * k9[j]
                     + D1410 * k10[j] + D1411 * k11[j] + D1412 * k12[j] + D1413 * k13[j]);
         }
         f.compute(tPrev + C14 * h, s, k14);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y1[j] + h * (D1501 * first[j] + D1506 * k6[j] + D1507 * k7[j] + D1508 * k8[j] + D1509 * k9[j]
                     + D1510 * k10[j] + D1511 * k11[j] + D1512 * k12[j] + D1513 * k13[j] + D1514 * k14[j]);
         }
         f.compute(tPrev + C15 * h, s, k15);
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < N; j++) {
             s[j] = y1[j] + h * (D1601 * first[j] + D1606 * k6[j] + D1607 * k7[j] + D1608 * k8[j] + D1609 * k9[j]
                     + D1610 * k10[j] + D1611 * k11[j] + D1612 * k12[j] + D1613 * k13[j] + D1614 * k14[j]
                     + D1615 * k15[j]);
         }
         f.compute(tPrev + C16 * h, s, k16);
-        for (int i = 0; i < n; i++) {
+        for (int i = 0; i < N; i++) {
             double d1 = first[i];
             double b = B1 * d1 + B6 * k6[i] + B7 * k7[i] + B8 * k8[i] + B9 * k9[i] + B10 * k10[i] + B11 * k11[i]
                     + B12 * k12[i];
-            v[0][i] = b;
-            v[1][i] = d1 - b;
-            v[2][i] = b - v[1][i] - k13[i];
-            for (int m = 0; m < P.length; m++) {
-                double[] p = P[m];
-                v[m + 3][i] = p[0] * d1 + p[1] * k6[i] + p[2] * k7[i] + p[3] * k8[i] + p[4] * k9[i] + p[5] * k10[i]
-                        + p[6] * k11[i] + p[7] * k12[i] + p[8] * k13[i] + p[9] * k14[i] + p[10] * k15[i]
-                        + p[11] * k16[i];
-            }
+            v0[i] = b;
+            v1[i] = d1 - b;
+            v2[i] = b - v1[i] - k13[i];
+            v3[i] = P4_1 * d1 + P4_6 * k6[i] + P4_7 * k7[i] + P4_8 * k8[i]
+                    + P4_9 * k9[i] + P4_10 * k10[i] + P4_11 * k11[i] + P4_12 * k12[i]
+                    + P4_13 * k13[i] + P4_14 * k14[i] + P4_15 * k15[i] + P4_16 * k16[i];
+            v4[i] = P5_1 * d1 + P5_6 * k6[i] + P5_7 * k7[i] + P5_8 * k8[i]
+                    + P5_9 * k9[i] + P5_10 * k10[i] + P5_11 * k11[i] + P5_12 * k12[i]
+                    + P5_13 * k13[i] + P5_14 * k14[i] + P5_15 * k15[i] + P5_16 * k16[i];
+            v5[i] = P6_1 * d1 + P6_6 * k6[i] + P6_7 * k7[i] + P6_8 * k8[i]
+                    + P6_9 * k9[i] + P6_10 * k10[i] + P6_11 * k11[i] + P6_12 * k12[i]
+                    + P6_13 * k13[i] + P6_14 * k14[i] + P6_15 * k15[i] + P6_16 * k16[i];
+            v6[i] = P7_1 * d1 + P7_6 * k6[i] + P7_7 * k7[i] + P7_8 * k8[i]
+                    + P7_9 * k9[i] + P7_10 * k10[i] + P7_11 * k11[i] + P7_12 * k12[i]
+                    + P7_13 * k13[i] + P7_14 * k14[i] + P7_15 * k15[i] + P7_16 * k16[i];
         }
         denseReady = true;
     }

@@ -143,7 +143,7 @@ public final class FullOrbitReference {
             throw new IllegalArgumentException("sampling interval must be positive, got " + interval + " s");
         }
         Equations eq = new Equations(new LorentzEquations(field, species));
-        DormandPrince853 dp = new DormandPrince853(6, eq, atol, rtols, span);
+        DormandPrince853 dp = new DormandPrince853(eq, atol, rtols, span);
         // check the domain at least 8 times per gyration so that no excursion is missed;
         // locate the crossing to 1e-12 of the time scale
         DomainExit exit = new DomainExit(field, dp, timeScale / 8, 1e-12 * timeScale);
