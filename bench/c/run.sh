@@ -2,8 +2,9 @@
 # The plain-C comparison for scan throughput: builds dop853.c (a copy of
 # shared/anchors/dop853_c extended with "orbits FILE": the scan's full-orbit reference runs with
 # the Java reference's step control, dense output, sampling and per-sample work), lists the runs
-# of each scan with the Java tool, checks the physics once, then times C and Java whole processes
-# alternately (C, Java, C, Java, ...) REPS times and prints the medians.
+# of each scan with the Java tool, checks the physics once, then times whole processes
+# alternately (C, Java with plain `java -jar`, Java through bin/twinorbit, C, ...) REPS times and
+# prints the medians; one thread everywhere.
 #   bench/c/run.sh                 # REPS=5, the three scans of results/benchmarks.md
 #   REPS=3 bench/c/run.sh dipole   # one scan
 # Needs harness/target/twinorbit.jar (mvn -B -ntp -q -DskipTests package).
@@ -29,13 +30,13 @@ median() { sort -g | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}'; }
 now() { date +%s.%N; }
 echo "load before: $(cut -d' ' -f1-3 /proc/loadavg)"
 echo
-echo "| scan | orbits | C field evaluations | C median wall s (process) | C median cpu s | Java median wall s (process) | wall ratio Java/C |"
-echo "|---|---|---|---|---|---|---|"
+echo "| scan | orbits | C field evaluations | C wall s | C cpu s | Java wall s (java -jar) | Java wall s (bin/twinorbit) | Java/C (java -jar) | Java/C (bin/twinorbit) |"
+echo "|---|---|---|---|---|---|---|---|---|"
 for n in "${names[@]}"; do
     args=${SCANS[$n]}
     # shellcheck disable=SC2086
     java -cp "$JAR" org.twinorbit.harness.bench.ScanOrbits $args --threads 1 > "$build/orbits-$n.txt"
-    : > "$build/c-$n.txt"; : > "$build/java-$n.txt"
+    : > "$build/c-$n.txt"; : > "$build/java-$n.txt"; : > "$build/launcher-$n.txt"
     for ((r = 0; r < REPS; r++)); do
         t0=$(now); "$build/dop853-ieee" orbits "$build/orbits-$n.txt" >> "$build/c-$n.txt"; t1=$(now)
         echo "process_wall_s=$(echo "$t1 - $t0" | bc -l)" >> "$build/c-$n.txt"
@@ -44,13 +45,20 @@ for n in "${names[@]}"; do
         java -jar "$JAR" scan $args --threads 1 --quiet --out "$build/scan-$n" > "$build/java-$n.log"
         t1=$(now)
         echo "process_wall_s=$(echo "$t1 - $t0" | bc -l)" >> "$build/java-$n.txt"
+        t0=$(now)
+        # shellcheck disable=SC2086
+        TWINORBIT_JAR=$JAR "$root/bin/twinorbit" scan $args --threads 1 --quiet --out "$build/scan-$n" > "$build/java-$n.log"
+        t1=$(now)
+        echo "process_wall_s=$(echo "$t1 - $t0" | bc -l)" >> "$build/launcher-$n.txt"
     done
     cw=$(grep -o 'process_wall_s=[0-9.]*' "$build/c-$n.txt" | cut -d= -f2 | median)
     cc=$(grep -o 'cpu_s=[0-9.]*' "$build/c-$n.txt" | cut -d= -f2 | median)
     jw=$(grep -o 'process_wall_s=[0-9.]*' "$build/java-$n.txt" | cut -d= -f2 | median)
+    lw=$(grep -o 'process_wall_s=[0-9.]*' "$build/launcher-$n.txt" | cut -d= -f2 | median)
     cf=$(grep -o 'fevals=[0-9]*' "$build/c-$n.txt" | head -1 | cut -d= -f2)
     no=$(wc -l < "$build/orbits-$n.txt")
-    printf '| %s | %s | %s | %.3f | %.3f | %.3f | %.2f |\n' "$n" "$no" "$cf" "$cw" "$cc" "$jw" "$(echo "$jw / $cw" | bc -l)"
+    printf '| %s | %s | %s | %.2f | %.2f | %.2f | %.2f | %.1f | %.1f |\n' "$n" "$no" "$cf" "$cw" "$cc" "$jw" "$lw" \
+        "$(echo "$jw / $cw" | bc -l)" "$(echo "$lw / $cw" | bc -l)"
 done
 echo
 echo "load after: $(cut -d' ' -f1-3 /proc/loadavg)"
