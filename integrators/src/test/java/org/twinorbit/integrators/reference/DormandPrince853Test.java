@@ -98,6 +98,40 @@ class DormandPrince853Test {
         assertTrue(worst < 1e-9, "worst deviation " + worst + " ρ");
     }
 
+    /** Steps and dense output allocate nothing of their own (common practice for hot loops). */
+    @Test
+    void stepsAndInterpolatesWithoutAllocating() {
+        java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+        if (!(mx instanceof com.sun.management.ThreadMXBean bean) || !bean.isThreadAllocatedMemorySupported()) {
+            return; // the JVM cannot count allocations: nothing to check
+        }
+        Field f = Fields.create("dipole", P);
+        double[][] s = start(f, new double[] {4 * 6.4e6, 0, 0}, 1e5, 45, 0.0);
+        LorentzEquations lorentz = new LorentzEquations(f, P);
+        double[] tol = {1e-10, 1e-10, 1e-10, 1e-10, 1e-10, 1e-10};
+        double[] atol = {1e-10 * 1e3, 1e-10 * 1e3, 1e-10 * 1e3, 1e-10 * 1e6, 1e-10 * 1e6, 1e-10 * 1e6};
+        DormandPrince853 dp = new DormandPrince853(lorentz::derivatives, atol, tol, 1e9);
+        double[] y = {s[0][0], s[0][1], s[0][2], s[1][0], s[1][1], s[1][2]};
+        dp.start(0, y, 1e9);
+        double[] out = new double[6];
+        for (int i = 0; i < 20000; i++) {
+            dp.step(); // warm-up so that nothing is counted from class loading or compilation
+            dp.interpolate(0.5 * (dp.previousTime() + dp.currentTime()), out);
+        }
+        long id = Thread.currentThread().getId();
+        long before = bean.getThreadAllocatedBytes(id);
+        for (int i = 0; i < 100000; i++) {
+            dp.step();
+            dp.interpolate(0.5 * (dp.previousTime() + dp.currentTime()), out);
+        }
+        long bytes = bean.getThreadAllocatedBytes(id) - before;
+        // The one allocation left is Commons Math's: FastMath.pow, which keeps the step control
+        // bit-identical to the library's, makes a 2-element work array (32 B) per call, one call
+        // per step. Anything of ours allocated per step would add ≥ 16 B more.
+        assertTrue(bytes < 100_000 + 32L * 100000, bytes + " bytes allocated over 1e5 steps");
+        assertTrue(dp.currentTime() > 0 && Double.isFinite(out[0]), "the steps really ran");
+    }
+
     private static double[][] start(Field f, double[] gc, double ev, double pitch, double phase) {
         var ic = InitialCondition.ofEnergy(f, P, ev, pitch, new org.twinorbit.shared.Vec3(gc[0], gc[1], gc[2]));
         var p = ic.particles(8, GyroPlacement.ZEROTH_EXB).get((int) Math.round(phase * 8) % 8);
