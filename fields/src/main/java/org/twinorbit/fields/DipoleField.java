@@ -35,6 +35,17 @@ public final class DipoleField implements Field {
     @Override public String name() { return "dipole"; }
 
     @Override
+    public void evaluateForce(double t, double x, double y, double z, FieldSample out) {
+        double r2 = x * x + y * y + z * z;
+        double inv2 = 1.0 / r2;
+        double inv5 = inv2 * inv2 / Math.sqrt(r2);
+        out.bx = -3.0 * k * x * z * inv5;
+        out.by = -3.0 * k * y * z * inv5;
+        out.bz = k * (x * x + y * y - 2.0 * z * z) * inv5;
+        out.ex = out.ey = out.ez = 0;
+    }
+
+    @Override
     public void evaluate(double t, double x, double y, double z, FieldSample out) {
         out.clear();
         double r2 = x * x + y * y + z * z;

@@ -20,6 +20,16 @@ public interface Field {
      */
     void evaluate(double t, double x, double y, double z, FieldSample out);
 
+    /**
+     * Fills B (T) and E (V/m) of {@code out} at time t (s) and position (x, y, z) (m), with the
+     * same values as {@link #evaluate}; the other members may be left as they were. This is all
+     * the Lorentz force needs: a field whose derivatives cost much overrides it to skip them. The
+     * default evaluates everything.
+     */
+    default void evaluateForce(double t, double x, double y, double z, FieldSample out) {
+        evaluate(t, x, y, z, out);
+    }
+
     /** The characteristic length L (m) that defines ε = ρ0/L; +∞ for a field without one. */
     double length();
 

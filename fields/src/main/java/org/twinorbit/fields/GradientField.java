@@ -32,6 +32,13 @@ public final class GradientField implements Field {
     @Override public String name() { return "gradient"; }
 
     @Override
+    public void evaluateForce(double t, double x, double y, double z, FieldSample out) {
+        out.bx = out.by = 0;
+        out.bz = b0 * (1.0 + x / lg);
+        out.ex = out.ey = out.ez = 0;
+    }
+
+    @Override
     public void evaluate(double t, double x, double y, double z, FieldSample out) {
         out.clear();
         out.bz = b0 * (1.0 + x / lg);

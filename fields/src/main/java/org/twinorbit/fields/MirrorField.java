@@ -36,6 +36,15 @@ public final class MirrorField implements Field {
     @Override public String name() { return "mirror"; }
 
     @Override
+    public void evaluateForce(double t, double x, double y, double z, FieldSample out) {
+        double bk = b0 * k;
+        out.bx = -bk * x * z;
+        out.by = -bk * y * z;
+        out.bz = b0 * (1.0 + k * z * z);
+        out.ex = out.ey = out.ez = 0;
+    }
+
+    @Override
     public void evaluate(double t, double x, double y, double z, FieldSample out) {
         out.clear();
         double bk = b0 * k;

@@ -214,6 +214,16 @@ public final class CaseRunner {
                 new RunSchedule.GuidingCenterRuns(p.gc0.clone(), p.pPar0, p.mu, gcDts, gcSteps));
     }
 
+    /**
+     * Samples the references take from their dense output over [0, tEnd]:
+     * {@link #REFERENCE_SAMPLES_PER_GYRO} per initial gyroperiod, evenly spaced.
+     *
+     * @param tEnd end time (s) @param gyroPeriod initial gyroperiod (s)
+     */
+    public static long referenceSamples(double tEnd, double gyroPeriod) {
+        return Math.max(1, (long) Math.ceil(tEnd / gyroPeriod * REFERENCE_SAMPLES_PER_GYRO - 1e-9));
+    }
+
     /** One case: its setup, its jobs and their result slots. */
     static final class Plan {
         final ResolvedCase rc;
@@ -380,7 +390,7 @@ public final class CaseRunner {
             dt = rc.fullOrbitStep();
             n = Math.max(1, (long) Math.ceil(span * unit / dt - 1e-9));
             tEnd = n * dt;
-            samples = Math.max(1, (long) Math.ceil(tEnd / rc.gyroPeriod() * REFERENCE_SAMPLES_PER_GYRO - 1e-9));
+            samples = referenceSamples(tEnd, rc.gyroPeriod());
             gcN = Math.max(1, (long) Math.ceil(tEnd / (c.gcStepGyro() * rc.gyroPeriod()) - 1e-9));
             gcDt = tEnd / gcN;
             convN = Math.min(n, Math.max(1, (long) Math.ceil(CONVERGENCE_GYRO * c.stepsPerGyro() - 1e-9)));

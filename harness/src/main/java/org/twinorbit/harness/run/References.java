@@ -9,8 +9,9 @@ import org.twinorbit.shared.Species;
 
 /**
  * The two references driven with the metric observers attached: {@link FullOrbitReference}
- * and {@link GuidingCenterReference} (both Dormand–Prince 8(5,3) of Commons Math with dense
- * output sampled at fixed times).
+ * and {@link GuidingCenterReference} (both Dormand–Prince 8(5,3), the full orbit's our own
+ * allocation-free one that reproduces Commons Math's, the guiding center's Commons Math's, with
+ * dense output sampled at fixed times).
  */
 public final class References {
 
@@ -18,7 +19,8 @@ public final class References {
 
     /** Name and source of the full-orbit reference, for reports. */
     public static String fullOrbitMethod() {
-        return "Dormand-Prince 8(5,3) adaptive (Commons Math; Dormand & Prince 1980) on the Lorentz equations, dense output";
+        return "Dormand-Prince 8(5,3) adaptive (Dormand & Prince 1980; step control and dense output as Commons Math's) "
+                + "on the Lorentz equations, dense output";
     }
 
     /** Name and source of the guiding-center reference, for reports. */

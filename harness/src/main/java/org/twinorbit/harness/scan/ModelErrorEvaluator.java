@@ -15,6 +15,7 @@ import org.twinorbit.harness.run.CaseRunner;
 import org.twinorbit.harness.run.PhaseStatistic;
 import org.twinorbit.harness.run.ReferenceSummary;
 import org.twinorbit.harness.run.ResultRow;
+import org.twinorbit.harness.run.RunSchedule;
 import org.twinorbit.harness.run.Stat;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Species;
@@ -171,6 +172,31 @@ public final class ModelErrorEvaluator implements PointEvaluator {
                     yield new Run(runner.run(offSheet(eps)
                             ? caseAt(eps, energyEv, pitchDeg, 1, DurationUnit.CROSSINGS)
                             : caseAt(eps, energyEv, pitchDeg, NO_BOUNCE_GYRO, DurationUnit.GYROPERIODS)), true);
+                }
+            }
+        };
+    }
+
+    /**
+     * What one point integrates, without integrating it (the guiding-center reference still runs
+     * to measure a bounce period): the same case {@link #measure} runs, for the C comparison in
+     * {@code bench/c}.
+     */
+    public RunSchedule schedule(double eps, double energyEv, double pitchDeg) {
+        return switch (duration.unit()) {
+            case GYROPERIODS -> CaseRunner.schedule(caseAt(eps, energyEv, pitchDeg, duration.value(),
+                    DurationUnit.GYROPERIODS));
+            case FIELD_PERIODS -> CaseRunner.schedule(caseAt(eps, energyEv, pitchDeg,
+                    Math.max(duration.value() * recipe.periodInGyroperiods(eps), MIN_GYRO), DurationUnit.GYROPERIODS));
+            case CROSSINGS -> CaseRunner.schedule(caseAt(eps, energyEv, pitchDeg, duration.value(),
+                    DurationUnit.CROSSINGS));
+            case BOUNCES -> {
+                try {
+                    yield CaseRunner.schedule(caseAt(eps, energyEv, pitchDeg, duration.value(), DurationUnit.BOUNCES));
+                } catch (BadInputException noBounce) {
+                    yield CaseRunner.schedule(offSheet(eps)
+                            ? caseAt(eps, energyEv, pitchDeg, 1, DurationUnit.CROSSINGS)
+                            : caseAt(eps, energyEv, pitchDeg, NO_BOUNCE_GYRO, DurationUnit.GYROPERIODS));
                 }
             }
         };

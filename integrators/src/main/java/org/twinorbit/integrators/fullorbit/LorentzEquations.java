@@ -26,7 +26,7 @@ public final class LorentzEquations {
 
     /** Fills yDot with dy/dt at time t (s) and state y (m, m/s); one field evaluation. */
     public void derivatives(double t, double[] y, double[] yDot) {
-        field.evaluate(t, y[0], y[1], y[2], sample);
+        field.evaluateForce(t, y[0], y[1], y[2], sample);
         evaluations++;
         FieldSample f = sample;
         double ux = y[3], uy = y[4], uz = y[5];

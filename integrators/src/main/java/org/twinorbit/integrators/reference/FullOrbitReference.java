@@ -2,15 +2,9 @@ package org.twinorbit.integrators.reference;
 
 import org.twinorbit.integrators.OrbitStatus;
 import org.twinorbit.integrators.fullorbit.LorentzEquations;
-import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.events.EventHandler;
-import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
-import org.apache.commons.math3.ode.sampling.FixedStepHandler;
-import org.apache.commons.math3.ode.sampling.StepHandler;
-import org.apache.commons.math3.ode.sampling.StepInterpolator;
-import org.apache.commons.math3.ode.sampling.StepNormalizer;
-import org.apache.commons.math3.ode.sampling.StepNormalizerBounds;
-import org.apache.commons.math3.ode.sampling.StepNormalizerMode;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.AllowedSolution;
+import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.twinorbit.fields.Field;
 import org.twinorbit.shared.Constants;
 import org.twinorbit.shared.FieldSample;
@@ -20,9 +14,10 @@ import org.twinorbit.shared.Vec3;
 
 /**
  * The full-orbit reference: the Lorentz equations in (x, u = γv) integrated by the adaptive
- * Dormand–Prince 8(5,3) method of Commons Math (J. R. Dormand & P. J. Prince, J. Comput. Appl.
- * Math. 6, 19, 1980; E. Hairer, S. P. Nørsett & G. Wanner, Solving Ordinary Differential
- * Equations I, 1993, §II.10, section from memory) at a tight tolerance, with dense output sampled at a fixed interval,
+ * Dormand–Prince 8(5,3) method (J. R. Dormand & P. J. Prince, J. Comput. Appl. Math. 6, 19, 1980;
+ * E. Hairer, S. P. Nørsett & G. Wanner, Solving Ordinary Differential Equations I, 1993, §II.10,
+ * section from memory; our allocation-free {@link DormandPrince853}, which gives Commons Math's
+ * states to the last bit) at a tight tolerance, with dense output sampled at a fixed interval,
  * an event that stops the run where the particle leaves the field's domain (status LOST at the
  * crossing time), and an estimate of its own error from the same run at a 100× tighter
  * tolerance.
@@ -144,57 +139,78 @@ public final class FullOrbitReference {
 
         double[] atol = {tol * length, tol * length, tol * length, tol * speed, tol * speed, tol * speed};
         double[] rtols = {tol, tol, tol, tol, tol, tol};
-        DormandPrince853Integrator dp = new DormandPrince853Integrator(0.0, span, atol, rtols);
-
-        Equations eq = new Equations(new LorentzEquations(field, species));
-        LastStep last = new LastStep(t0, x0, u0);
-        dp.addStepHandler(last);
-        if (observer != null) {
-            if (!(interval > 0)) {
-                throw new IllegalArgumentException("sampling interval must be positive, got " + interval + " s");
-            }
-            dp.addStepHandler(new StepNormalizer(interval, new Sampler(observer),
-                    StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
+        if (observer != null && !(interval > 0)) {
+            throw new IllegalArgumentException("sampling interval must be positive, got " + interval + " s");
         }
-        DomainExit exit = new DomainExit(field);
+        Equations eq = new Equations(new LorentzEquations(field, species));
+        DormandPrince853 dp = new DormandPrince853(eq, atol, rtols, span);
         // check the domain at least 8 times per gyration so that no excursion is missed;
         // locate the crossing to 1e-12 of the time scale
-        dp.addEventHandler(exit, timeScale / 8, 1e-12 * timeScale, 1000);
+        DomainExit exit = new DomainExit(field, dp, timeScale / 8, 1e-12 * timeScale);
+        Sampler sampler = observer == null ? null : new Sampler(observer, interval);
 
         double[] y = {x0[0], x0[1], x0[2], u0[0], u0[1], u0[2]};
+        double lastT = t0;
+        double[] lastY = y.clone();
         OrbitStatus status = OrbitStatus.OK;
         double end;
         try {
-            end = dp.integrate(eq, t0, y, tEnd, y);
-            if (exit.crossed) {
-                status = OrbitStatus.LOST;
+            dp.start(t0, y, tEnd);
+            exit.begin(y);
+            if (sampler != null) {
+                sampler.begin(t0, y);
+            }
+            while (true) {
+                dp.step();
+                double crossing = exit.crossing(dp.previousTime(), dp.currentTime());
+                if (!Double.isNaN(crossing)) {
+                    dp.interpolate(crossing, y);
+                    if (sampler != null) {
+                        sampler.step(dp, crossing, y, true);
+                    }
+                    status = OrbitStatus.LOST;
+                    end = crossing;
+                    break;
+                }
+                double[] state = dp.state();
+                exit.accept(state);
+                boolean last = dp.atEnd();
+                if (sampler != null) {
+                    sampler.step(dp, dp.currentTime(), state, last);
+                }
+                lastT = dp.currentTime();
+                System.arraycopy(state, 0, lastY, 0, 6);
+                if (last) {
+                    end = lastT;
+                    System.arraycopy(state, 0, y, 0, 6);
+                    break;
+                }
             }
         } catch (NonFinite e) {
             status = OrbitStatus.UNSTABLE;
-            end = last.t;
-            System.arraycopy(last.y, 0, y, 0, 6);
+            end = lastT;
+            System.arraycopy(lastY, 0, y, 0, 6);
         }
         return new Result(status, end, new Vec3(y[0], y[1], y[2]), new Vec3(y[3], y[4], y[5]),
                 eq.lorentz.evaluations(), length, speed);
     }
 
-    /** The Lorentz equations as Commons Math sees them; refuses a non-finite state. */
-    private static final class Equations implements FirstOrderDifferentialEquations {
+    /** The Lorentz equations as the integrator sees them; refuses a non-finite state. */
+    private static final class Equations implements DormandPrince853.Derivatives {
         final LorentzEquations lorentz;
 
         Equations(LorentzEquations lorentz) {
             this.lorentz = lorentz;
         }
 
-        @Override public int getDimension() { return 6; }
-
         @Override
-        public void computeDerivatives(double t, double[] y, double[] yDot) {
+        public void compute(double t, double[] y, double[] yDot) {
             lorentz.derivatives(t, y, yDot);
-            for (int i = 0; i < 6; i++) {
-                if (!Double.isFinite(y[i]) || !Double.isFinite(yDot[i])) {
-                    throw new NonFinite();
-                }
+            // 0·v is 0 for every finite v and NaN for ±∞ or NaN: one branch for the twelve checks
+            double z = 0 * y[0] + 0 * y[1] + 0 * y[2] + 0 * y[3] + 0 * y[4] + 0 * y[5]
+                    + 0 * yDot[0] + 0 * yDot[1] + 0 * yDot[2] + 0 * yDot[3] + 0 * yDot[4] + 0 * yDot[5];
+            if (z != 0) {
+                throw new NonFinite();
             }
         }
     }
@@ -206,72 +222,108 @@ public final class FullOrbitReference {
         }
     }
 
-    /** Hands the normalised samples to the observer as (t, x, u). */
-    private static final class Sampler implements FixedStepHandler {
+    /**
+     * Hands the observer the dense output at t0, t0 + interval, t0 + 2·interval, ... (each time
+     * the previous one plus the interval) and at the end.
+     */
+    private static final class Sampler {
         private final FullOrbitObserver observer;
+        private final double interval;
+        private final double[] y = new double[6];
         private final double[] xs = new double[3], us = new double[3];
+        private double lastTime;
 
-        Sampler(FullOrbitObserver observer) {
+        Sampler(FullOrbitObserver observer, double interval) {
             this.observer = observer;
+            this.interval = interval;
         }
 
-        @Override public void init(double t0, double[] y0, double t) {}
+        void begin(double t0, double[] y0) {
+            lastTime = t0;
+            emit(t0, y0);
+        }
 
-        @Override
-        public void handleStep(double t, double[] y, double[] yDot, boolean isLast) {
-            System.arraycopy(y, 0, xs, 0, 3);
-            System.arraycopy(y, 3, us, 0, 3);
+        /** The samples inside the last step up to tPart (s), and at tPart (state yPart) if it is the last. */
+        void step(DormandPrince853 dp, double tPart, double[] yPart, boolean last) {
+            double next = lastTime + interval;
+            while (next <= tPart) {
+                dp.interpolate(next, y);
+                lastTime = next;
+                emit(next, y);
+                next = lastTime + interval;
+            }
+            if (last && lastTime != tPart) {
+                lastTime = tPart;
+                emit(tPart, yPart);
+            }
+        }
+
+        private void emit(double t, double[] state) {
+            System.arraycopy(state, 0, xs, 0, 3);
+            System.arraycopy(state, 3, us, 0, 3);
             observer.observe(t, xs, us);
         }
     }
 
-    /** Remembers the last accepted step, the state kept when a run goes unstable. */
-    private static final class LastStep implements StepHandler {
-        double t;
-        final double[] y = new double[6];
-
-        LastStep(double t0, double[] x0, double[] u0) {
-            t = t0;
-            System.arraycopy(x0, 0, y, 0, 3);
-            System.arraycopy(u0, 0, y, 3, 3);
-        }
-
-        @Override public void init(double t0, double[] y0, double t) {}
-
-        @Override
-        public void handleStep(StepInterpolator interpolator, boolean isLast) {
-            t = interpolator.getCurrentTime();
-            System.arraycopy(interpolator.getInterpolatedState(), 0, y, 0, 6);
-        }
-    }
-
-    /** Stops the run where the field's domain margin changes sign. */
-    private static final class DomainExit implements EventHandler {
+    /**
+     * Watches the field's domain margin g along the orbit: at every step end and at least every
+     * maxCheck (s) inside a step through the dense output; where g turns negative the crossing is
+     * located to the given accuracy with a bracketing Brent solver (Commons Math), on the far side.
+     */
+    private static final class DomainExit {
         private final Field field;
-        boolean crossed;
+        private final DormandPrince853 dp;
+        private final double maxCheck;
+        private final double convergence;
+        private final BracketingNthOrderBrentSolver solver;
+        private final double[] y = new double[6];
+        private final UnivariateFunction margin;
+        private double g0;
 
-        DomainExit(Field field) {
+        DomainExit(Field field, DormandPrince853 dp, double maxCheck, double convergence) {
             this.field = field;
+            this.dp = dp;
+            this.maxCheck = maxCheck;
+            this.convergence = convergence;
+            this.solver = new BracketingNthOrderBrentSolver(convergence, 5);
+            this.margin = t -> {
+                dp.interpolate(t, y);
+                return g(y);
+            };
         }
 
-        @Override public void init(double t0, double[] y0, double t) {}
-
-        @Override
-        public double g(double t, double[] y) {
-            double m = field.domainMargin(y[0], y[1], y[2]);
+        private double g(double[] state) {
+            double m = field.domainMargin(state[0], state[1], state[2]);
             // an unbounded field reports +∞; the root finder needs finite values
             return Math.max(-Double.MAX_VALUE, Math.min(Double.MAX_VALUE, m));
         }
 
-        @Override
-        public Action eventOccurred(double t, double[] y, boolean increasing) {
-            if (increasing) {
-                return Action.CONTINUE;
-            }
-            crossed = true;
-            return Action.STOP;
+        void begin(double[] y0) {
+            g0 = g(y0);
         }
 
-        @Override public void resetState(double t, double[] y) {}
+        void accept(double[] state) {
+            g0 = g(state);
+        }
+
+        /** The time (s) the orbit leaves the domain inside [t0, t1], or NaN. */
+        double crossing(double t0, double t1) {
+            double dt = t1 - t0;
+            if (!(g0 >= 0) || Math.abs(dt) < convergence) {
+                return Double.NaN;
+            }
+            int n = Math.max(1, (int) Math.ceil(Math.abs(dt) / maxCheck));
+            double h = dt / n;
+            double ta = t0;
+            for (int i = 0; i < n; i++) {
+                double tb = i == n - 1 ? t1 : t0 + (i + 1) * h;
+                double gb = margin.value(tb);
+                if (gb < 0) {
+                    return solver.solve(1000, margin, ta, tb, AllowedSolution.RIGHT_SIDE);
+                }
+                ta = tb;
+            }
+            return Double.NaN;
+        }
     }
 }
