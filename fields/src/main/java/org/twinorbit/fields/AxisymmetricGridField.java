@@ -1,7 +1,6 @@
 package org.twinorbit.fields;
 
 import org.twinorbit.shared.FieldSample;
-import org.twinorbit.shared.Vec3;
 
 /**
  * A static axisymmetric magnetic field given on a uniform (R, Z) grid as the components
@@ -15,11 +14,8 @@ import org.twinorbit.shared.Vec3;
  * W = kinetic + qΦ is an exact invariant of the interpolated field. The domain is R0 ≤ R ≤ R1,
  * Z0 ≤ Z ≤ Z1; a particle leaving it is lost.
  */
-public final class AxisymmetricGridField extends GriddedFieldBase {
+public final class AxisymmetricGridField extends AnnulusGridField {
 
-    private final double[] r;
-    private final double[] z;
-    private final RzAnnulus domain;
     private final BicubicTable table;
 
     /**
@@ -33,10 +29,7 @@ public final class AxisymmetricGridField extends GriddedFieldBase {
      */
     public AxisymmetricGridField(String name, double[] r, double[] z, double[][][] b, double[][] pot, double length,
                                  String meaning) {
-        super(name, length, meaning, pot != null);
-        this.r = r;
-        this.z = z;
-        this.domain = new RzAnnulus(r, z);
+        super(name, r, z, length, meaning, pot != null);
         this.table = new BicubicTable(new double[] {r[0], z[0]}, new double[] {step(r), step(z)},
                 electric ? new double[][][] {b[0], b[1], b[2], pot} : b);
     }
@@ -60,10 +53,7 @@ public final class AxisymmetricGridField extends GriddedFieldBase {
             sc.grad[c][1] = 0;
             sc.grad[c][2] = sc.rz[c][1];
         }
-        CylindricalBasis.toCartesian(rr, x / rr, y / rr, sc.val, sc.grad, out);
-        if (electric) {
-            CylindricalBasis.electricField(rr, x / rr, y / rr, sc.grad[3], out);
-        }
+        toCartesian(rr, x, y, sc.val, sc.grad, out);
     }
 
     @Override
@@ -72,11 +62,6 @@ public final class AxisymmetricGridField extends GriddedFieldBase {
         table.evaluate(Math.sqrt(x * x + y * y), zz, sc.val, sc.rz);
         return sc.val[3];
     }
-
-    @Override public double domainMargin(double x, double y, double zz) { return domain.margin(x, y, zz); }
-    @Override public String domainMeaning() { return domain.meaning(); }
-    @Override public Vec3 defaultStart() { return domain.centre(); }
-    @Override double extent() { return domain.extent(); }
 
     @Override public GridGeometry geometry() { return GridGeometry.AXISYMMETRIC; }
 

@@ -1,7 +1,6 @@
 package org.twinorbit.fields;
 
 import org.twinorbit.shared.FieldSample;
-import org.twinorbit.shared.Vec3;
 
 /**
  * A static magnetic field given on a uniform cylindrical grid (R, φ, Z) whose φ nodes cover one
@@ -18,12 +17,9 @@ import org.twinorbit.shared.Vec3;
  * an exact invariant of the interpolated field. The domain is R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1; a
  * particle leaving it is lost.
  */
-public final class CylindricalGridField extends GriddedFieldBase {
+public final class CylindricalGridField extends AnnulusGridField {
 
-    private final double[] r;
     private final double[] phi;
-    private final double[] z;
-    private final RzAnnulus domain;
     private final TricubicTable table;
 
     /**
@@ -39,11 +35,8 @@ public final class CylindricalGridField extends GriddedFieldBase {
      */
     public CylindricalGridField(String name, double[] r, double[] phi, double[] z, double[][][][] b, double[][][] pot,
                                 double length, String meaning) {
-        super(name, length, meaning, pot != null);
-        this.r = r;
+        super(name, r, z, length, meaning, pot != null);
         this.phi = phi;
-        this.z = z;
-        this.domain = new RzAnnulus(r, z);
         double[] origin = {r[0], phi[0], z[0]};
         double[] h = {step(r), 2 * Math.PI / phi.length, step(z)};
         this.table = new TricubicTable(origin, h, electric ? new double[][][][] {b[0], b[1], b[2], pot} : b,
@@ -64,10 +57,7 @@ public final class CylindricalGridField extends GriddedFieldBase {
         double rr = Math.sqrt(x * x + y * y);
         double p = Math.atan2(y, x);
         table.evaluate(rr, p, zz, sc.val, sc.grad);
-        CylindricalBasis.toCartesian(rr, x / rr, y / rr, sc.val, sc.grad, out);
-        if (electric) {
-            CylindricalBasis.electricField(rr, x / rr, y / rr, sc.grad[3], out);
-        }
+        toCartesian(rr, x, y, sc.val, sc.grad, out);
     }
 
     @Override
@@ -76,11 +66,6 @@ public final class CylindricalGridField extends GriddedFieldBase {
         table.evaluate(Math.sqrt(x * x + y * y), Math.atan2(y, x), zz, sc.val, sc.grad);
         return sc.val[3];
     }
-
-    @Override public double domainMargin(double x, double y, double zz) { return domain.margin(x, y, zz); }
-    @Override public String domainMeaning() { return domain.meaning(); }
-    @Override public Vec3 defaultStart() { return domain.centre(); }
-    @Override double extent() { return domain.extent(); }
 
     @Override public GridGeometry geometry() { return GridGeometry.CYLINDRICAL; }
 

@@ -7,7 +7,8 @@ import java.util.List;
  * What the three gridded fields ({@link GridField}, {@link CylindricalGridField},
  * {@link AxisymmetricGridField}) share: their name and length, the energy invariant, Φ taken as
  * zero without a potential table, no vector potential, and the divergence check computed once.
- * Each subclass keeps its own table, evaluation and domain.
+ * Each subclass keeps its own table and evaluation; {@link AnnulusGridField} adds the R–Z domain
+ * of the two curvilinear grids.
  */
 abstract class GriddedFieldBase implements GriddedField {
 
