@@ -141,19 +141,11 @@ public final class BicubicSpline {
     }
 
     /**
-     * Cubic Hermite basis on a cell of width h at fraction u: w[0], w[1] weigh the values at the
-     * two ends, w[2], w[3] the slopes (per metre, hence the factor h); dw, d2w are d/dx, d²/dx².
+     * The cubic Hermite basis w and its d/dx dw on a cell of width h (m) at fraction u
+     * ({@link CubicHermite#basis}), and its d²/dx² d2w.
      */
     private static void basis(double u, double h, double[] w, double[] dw, double[] d2w) {
-        double u2 = u * u, u3 = u2 * u;
-        w[0] = 2 * u3 - 3 * u2 + 1;
-        w[1] = -2 * u3 + 3 * u2;
-        w[2] = (u3 - 2 * u2 + u) * h;
-        w[3] = (u3 - u2) * h;
-        dw[0] = (6 * u2 - 6 * u) / h;
-        dw[1] = (-6 * u2 + 6 * u) / h;
-        dw[2] = 3 * u2 - 4 * u + 1;
-        dw[3] = 3 * u2 - 2 * u;
+        CubicHermite.basis(u, h, w, dw);
         d2w[0] = (12 * u - 6) / (h * h);
         d2w[1] = (6 - 12 * u) / (h * h);
         d2w[2] = (6 * u - 4) / h;

@@ -1,8 +1,6 @@
 package org.twinorbit.fields;
 
-import java.util.List;
 import org.twinorbit.shared.FieldSample;
-import org.twinorbit.shared.Vec3;
 
 /**
  * A static magnetic field given on a uniform cylindrical grid (R, φ, Z) whose φ nodes cover one
@@ -19,18 +17,10 @@ import org.twinorbit.shared.Vec3;
  * an exact invariant of the interpolated field. The domain is R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1; a
  * particle leaving it is lost.
  */
-public final class CylindricalGridField implements GriddedField {
+public final class CylindricalGridField extends AnnulusGridField {
 
-    private final String name;
-    private final double[] r;
     private final double[] phi;
-    private final double[] z;
     private final TricubicTable table;
-    private final double length;
-    private final String meaning;
-    private final List<Invariant> invariants;
-    private volatile Double divergence;
-    private final boolean electric;
 
     /**
      * @param name    the field's name in reports
@@ -45,25 +35,13 @@ public final class CylindricalGridField implements GriddedField {
      */
     public CylindricalGridField(String name, double[] r, double[] phi, double[] z, double[][][][] b, double[][][] pot,
                                 double length, String meaning) {
-        this.name = name;
-        this.r = r;
+        super(name, r, z, length, meaning, pot != null);
         this.phi = phi;
-        this.z = z;
         double[] origin = {r[0], phi[0], z[0]};
         double[] h = {step(r), 2 * Math.PI / phi.length, step(z)};
-        this.electric = pot != null;
         this.table = new TricubicTable(origin, h, electric ? new double[][][][] {b[0], b[1], b[2], pot} : b,
                 new boolean[] {false, true, false});
-        this.length = length;
-        this.meaning = meaning;
-        this.invariants = List.of(Invariants.energy(this));
     }
-
-    private static double step(double[] a) {
-        return (a[a.length - 1] - a[0]) / (a.length - 1);
-    }
-
-    @Override public String name() { return name; }
 
     private static final class Scratch {
         final double[] val = new double[4];
@@ -79,53 +57,14 @@ public final class CylindricalGridField implements GriddedField {
         double rr = Math.sqrt(x * x + y * y);
         double p = Math.atan2(y, x);
         table.evaluate(rr, p, zz, sc.val, sc.grad);
-        CylindricalBasis.toCartesian(rr, x / rr, y / rr, sc.val, sc.grad, out);
-        if (electric) {
-            CylindricalBasis.electricField(rr, x / rr, y / rr, sc.grad[3], out);
-        }
+        toCartesian(rr, x, y, sc.val, sc.grad, out);
     }
 
-    /** The interpolated Φ (V); 0 without one. */
     @Override
-    public double potential(double t, double x, double y, double zz) {
-        if (!electric) {
-            return 0;
-        }
+    double interpolatedPotential(double x, double y, double zz) {
         Scratch sc = scratch.get();
         table.evaluate(Math.sqrt(x * x + y * y), Math.atan2(y, x), zz, sc.val, sc.grad);
         return sc.val[3];
-    }
-
-    /** E, when there is one, is −∇Φ of the interpolated Φ. */
-    @Override public boolean hasPotential() { return true; }
-
-    /** Not known for a field given only as B on a grid: NaN (no canonical invariant uses it). */
-    @Override
-    public void vectorPotential(double t, double x, double y, double z, double[] out) {
-        java.util.Arrays.fill(out, Double.NaN);
-    }
-
-    @Override public double length() { return length; }
-    @Override public String lengthMeaning() { return meaning; }
-    @Override public boolean hasElectricField() { return electric; }
-
-    @Override
-    public double domainMargin(double x, double y, double zz) {
-        double rr = Math.sqrt(x * x + y * y);
-        return Math.min(Math.min(rr - r[0], r[r.length - 1] - rr), Math.min(zz - z[0], z[z.length - 1] - zz));
-    }
-
-    @Override
-    public String domainMeaning() {
-        return "the grid's annulus " + r[0] + " <= R <= " + r[r.length - 1] + " m, " + z[0] + " <= Z <= "
-                + z[z.length - 1] + " m; a particle leaving it is lost";
-    }
-
-    @Override public List<Invariant> invariants() { return invariants; }
-
-    @Override
-    public Vec3 defaultStart() {
-        return new Vec3((r[0] + r[r.length - 1]) / 2, 0, (z[0] + z[z.length - 1]) / 2);
     }
 
     @Override public GridGeometry geometry() { return GridGeometry.CYLINDRICAL; }
@@ -152,13 +91,5 @@ public final class CylindricalGridField implements GriddedField {
             }
         }
         return p;
-    }
-
-    @Override
-    public double maxDivergence() {
-        if (divergence == null) {
-            divergence = GriddedField.divergenceOver(this, Math.max(2 * r[r.length - 1], z[z.length - 1] - z[0]));
-        }
-        return divergence;
     }
 }

@@ -1,6 +1,5 @@
 package org.twinorbit.fields;
 
-import java.util.List;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Vec3;
 
@@ -15,19 +14,13 @@ import org.twinorbit.shared.Vec3;
  * W = kinetic + qΦ is an exact invariant of the interpolated field. The domain is the grid box; a
  * particle leaving it is lost.
  */
-public final class GridField implements GriddedField {
+public final class GridField extends GriddedFieldBase {
 
-    private final String name;
     private final double[][] axes;
     private final double[] x0 = new double[3];
     private final double[] h = new double[3];
     private final int[] n = new int[3];
     private final TricubicTable table;
-    private final double length;
-    private final String meaning;
-    private final List<Invariant> invariants;
-    private volatile Double divergence;
-    private final boolean electric;
 
     /**
      * @param name   the field's name in reports
@@ -38,21 +31,15 @@ public final class GridField implements GriddedField {
      * @param meaning what L means, for reports
      */
     public GridField(String name, double[][] axes, double[][][][] b, double[][][] phi, double length, String meaning) {
-        this.name = name;
+        super(name, length, meaning, phi != null);
         this.axes = axes;
         for (int a = 0; a < 3; a++) {
             n[a] = axes[a].length;
             x0[a] = axes[a][0];
             h[a] = (axes[a][n[a] - 1] - axes[a][0]) / (n[a] - 1);
         }
-        this.electric = phi != null;
         this.table = new TricubicTable(x0, h, electric ? new double[][][][] {b[0], b[1], b[2], phi} : b, new boolean[3]);
-        this.length = length;
-        this.meaning = meaning;
-        this.invariants = List.of(Invariants.energy(this));
     }
-
-    @Override public String name() { return name; }
 
     /** Per-thread scratch, so that an evaluation allocates nothing. */
     private static final class Scratch {
@@ -82,29 +69,12 @@ public final class GridField implements GriddedField {
         }
     }
 
-    /** The interpolated Φ (V); 0 without one. */
     @Override
-    public double potential(double t, double x, double y, double z) {
-        if (!electric) {
-            return 0;
-        }
+    double interpolatedPotential(double x, double y, double z) {
         Scratch sc = scratch.get();
         table.evaluate(x, y, z, sc.val, sc.grad);
         return sc.val[3];
     }
-
-    /** E, when there is one, is −∇Φ of the interpolated Φ. */
-    @Override public boolean hasPotential() { return true; }
-
-    /** Not known for a field given only as B on a grid: NaN (no canonical invariant uses it). */
-    @Override
-    public void vectorPotential(double t, double x, double y, double z, double[] out) {
-        java.util.Arrays.fill(out, Double.NaN);
-    }
-
-    @Override public double length() { return length; }
-    @Override public String lengthMeaning() { return meaning; }
-    @Override public boolean hasElectricField() { return electric; }
 
     @Override
     public double domainMargin(double x, double y, double z) {
@@ -122,8 +92,6 @@ public final class GridField implements GriddedField {
     public String domainMeaning() {
         return "the grid box; a particle leaving it is lost";
     }
-
-    @Override public List<Invariant> invariants() { return invariants; }
 
     @Override
     public Vec3 defaultStart() {
@@ -154,11 +122,7 @@ public final class GridField implements GriddedField {
     }
 
     @Override
-    public double maxDivergence() {
-        if (divergence == null) {
-            divergence = GriddedField.divergenceOver(this, Math.max(h[0] * (n[0] - 1),
-                    Math.max(h[1] * (n[1] - 1), h[2] * (n[2] - 1))));
-        }
-        return divergence;
+    double extent() {
+        return Math.max(h[0] * (n[0] - 1), Math.max(h[1] * (n[1] - 1), h[2] * (n[2] - 1)));
     }
 }
