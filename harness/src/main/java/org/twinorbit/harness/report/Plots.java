@@ -170,13 +170,14 @@ public final class Plots {
         double tc = r.resolved().gyroPeriod();
         List<String> spans = new ArrayList<>();
         if (Double.isFinite(sw.fullOrbitSpan())) {
-            spans.add("full orbit after " + Format.number(sw.fullOrbitSpan() / tc) + " Tc");
+            spans.add(Format.number(sw.fullOrbitSpan() / tc) + " Tc (full orbit)");
         }
         if (r.rows().stream().anyMatch(x -> x.model().equals("guiding-center") && x.convergenceDt().length > 0)) {
-            spans.add("guiding center after " + Format.number(sw.guidingCenterSpan() / tc) + " Tc");
+            spans.add(Format.number(sw.guidingCenterSpan() / tc) + " Tc (guiding center)");
         }
-        XYChart c = chart(r.resolved().spec().name() + ", phase 0: end-position error, " + String.join(", ", spans),
-                "dt / Tc  (each integrator at dt, dt/2, dt/4, dt/8)", "|x(end) \u2212 x_ref(end)| / \u03c10");
+        // the title names the span measured; it stays short enough not to be clipped over the plot
+        XYChart c = chart(r.resolved().spec().name() + ": end error after " + String.join(", ", spans),
+                "dt / Tc  (each integrator at dt, dt/2, dt/4, dt/8)", "phase 0: |x(end) \u2212 x_ref(end)| / \u03c10");
         LogAxes.x(c.getStyler());
         LogAxes.y(c.getStyler());
         List<ResultRow> shown = new ArrayList<>();
