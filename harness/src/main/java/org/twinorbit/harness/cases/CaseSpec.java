@@ -151,10 +151,25 @@ public final class CaseSpec {
         }
         List<String> ps = pick(pushers, allPushers, "pushers");
         List<String> gs = pick(gcIntegrators, allGc, "gc-integrators");
-        String label = name != null ? name : f + "-" + s.name();
+        String label = name != null ? name : label(f) + "-" + s.name();
         return new Case(label, f, fieldParameters == null ? Map.of() : fieldParameters, s, x0, e, eps, p, n,
                 d, unit, ps, spg, gs, gcs, rtol,
                 gcStart == null ? GuidingCenterStart.MATCHED : GuidingCenterStart.parse(gcStart, "gc-start"));
+    }
+
+    /**
+     * The field's part of a default case name: the field's name, or for a file (grid:, geqdsk:) the
+     * kind and the file's base name, since a case name becomes a folder name (export, suite) and
+     * a path in it would put the output elsewhere.
+     */
+    static String label(String field) {
+        int colon = field.indexOf(':');
+        if (colon < 0 || !org.twinorbit.fields.Fields.isFile(field)) {
+            return field;
+        }
+        String base = java.nio.file.Path.of(field.substring(colon + 1)).getFileName().toString();
+        int dot = base.lastIndexOf('.');
+        return field.substring(0, colon) + "-" + (dot > 0 ? base.substring(0, dot) : base);
     }
 
     private static List<String> pick(List<String> chosen, List<String> all, String option) {

@@ -120,6 +120,11 @@ public final class CaseExport {
         sb.append("field,").append(c.field()).append(",\n");
         sb.append("mass,").append(c.species().mass()).append(",kg\n");
         sb.append("charge,").append(c.species().charge()).append(",C\n");
+        if (Fields.isFile(c.field())) {
+            // a grid or G-EQDSK file has no provider: its parameters are only those given (cocos)
+            c.fieldParameters().forEach((k, v) -> sb.append("field.").append(k).append(',').append(v).append(",\n"));
+            return sb.toString();
+        }
         for (ParameterSpec ps : Fields.provider(c.field()).parameters()) {
             sb.append("field.").append(ps.name()).append(',')
                     .append(c.fieldParameters().getOrDefault(ps.name(), ps.defaultValue())).append(',').append(ps.unit())
@@ -265,26 +270,33 @@ public final class CaseExport {
 
     static Map<String, Object> card(ResolvedCase rc) {
         Case c = rc.spec();
-        FieldProvider p = Fields.provider(c.field());
+        boolean file = Fields.isFile(c.field());
+        FieldProvider p = file ? null : Fields.provider(c.field());
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("schema", "twinorbit-field-card");
         m.put("schema_version", SCHEMA_VERSION);
-        m.put("field", p.name());
-        m.put("description", p.description());
+        m.put("field", file ? c.field() : p.name());
+        m.put("description", file ? "field read from the file " + c.field().substring(c.field().indexOf(':') + 1)
+                : p.description());
         List<Object> params = new ArrayList<>();
-        for (ParameterSpec ps : p.parameters()) {
-            Map<String, Object> o = new LinkedHashMap<>();
-            o.put("name", ps.name());
-            o.put("value", c.fieldParameters().getOrDefault(ps.name(), ps.defaultValue()));
-            o.put("unit", ps.unit());
-            o.put("description", ps.description());
-            params.add(o);
+        if (file) {
+            c.fieldParameters().forEach((k, v) -> params.add(new LinkedHashMap<>(Map.of("name", k, "value", v))));
+        } else {
+            for (ParameterSpec ps : p.parameters()) {
+                Map<String, Object> o = new LinkedHashMap<>();
+                o.put("name", ps.name());
+                o.put("value", c.fieldParameters().getOrDefault(ps.name(), ps.defaultValue()));
+                o.put("unit", ps.unit());
+                o.put("description", ps.description());
+                params.add(o);
+            }
         }
         m.put("parameters", params);
-        m.put("length_meaning", p.lengthMeaning());
+        m.put("length_meaning", file ? rc.field().lengthMeaning() : p.lengthMeaning());
         m.put("l_m", finite(rc.field().length()));
         m.put("domain", rc.field().domainMeaning());
-        m.put("invariants", p.invariantsMeaning());
+        m.put("invariants", file ? String.join("; ", rc.field().invariants().stream().map(i -> i.description()).toList())
+                : p.invariantsMeaning());
         m.put("table", "field-card.csv");
         List<String> cols = new ArrayList<>(List.of("x_m", "y_m", "z_m", "t_s"));
         cols.addAll(FieldProbe.COLUMNS);

@@ -104,6 +104,26 @@ class CaseExportTest {
         }
     }
 
+    /** A field read from a file has no provider: export must still describe and tabulate it (it failed before). */
+    @Test
+    void aG_EqdskCaseIsExportedWithItsFieldCard() throws IOException {
+        String field = "geqdsk:../examples/geqdsk-demo/shaped-deuteron.geqdsk";
+        TestCommandLine.succeeded("export", "--field", field, "--species", "deuteron", "--energy", "20e3", "--pitch", "75",
+                "--duration", "20", "--out", tmp.toString());
+        // the case folder is named after the file, not its path (a path would have put it elsewhere)
+        Path dir = tmp.resolve("geqdsk-shaped-deuteron-deuteron");
+        JsonNode card = JSON.readTree(dir.resolve("field-card.json").toFile());
+        assertEquals(field, card.get("field").asText());
+        assertTrue(card.get("invariants").asText().contains("energy"), card.toString());
+        assertTrue(Files.readString(dir.resolve("case.csv")).contains("field," + field), "case.csv names the file");
+        // a card row is the field at that point, as probe gives it
+        List<String> rows = Files.readAllLines(dir.resolve("field-card.csv"));
+        String[] row = rows.get(10).split(",");
+        String again = TestCommandLine.succeeded("probe", "--field", field, "--species", "deuteron",
+                "--at", row[0] + "," + row[1] + "," + row[2]);
+        assertEquals(rows.get(10), again.strip().split("\n")[1]);
+    }
+
     @Test
     void fieldCardMatchesTheMirrorOnItsAxis() throws IOException {
         TestCommandLine.succeeded("export", "--field", "mirror", "--eps", "0.05", "--out", tmp.toString());
