@@ -105,7 +105,7 @@ class PlotsPictureTest {
         // the full-orbit sweep runs 4 initial gyroperiods (CaseRunner.CONVERGENCE_GYRO), the
         // guiding-center sweep the whole run
         assertTrue(c.getTitle().contains("after 4 Tc (full orbit)"), c.getTitle());
-        assertTrue(c.getTitle().contains("guiding center after 20 Tc"), c.getTitle());
+        assertTrue(c.getTitle().contains("20 Tc (guiding center)"), c.getTitle());
         assertTrue(c.getXAxisTitle().contains("dt, dt/2, dt/4, dt/8"), c.getXAxisTitle());
     }
 
