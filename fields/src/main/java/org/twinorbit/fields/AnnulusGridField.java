@@ -5,7 +5,7 @@ import org.twinorbit.shared.Vec3;
 
 /**
  * What the cylindrical and the axisymmetric grid share: uniform R and Z nodes, the domain
- * R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1 (a particle leaving it is lost), and the turn of the interpolated
+ * R0 ≤ R ≤ R1, Z0 ≤ Z ≤ Z1 (a particle leaving it is lost; a wall may cut it further), and the turn of the interpolated
  * cylindrical components into Cartesian B, Jacobian and E.
  */
 abstract class AnnulusGridField extends GriddedFieldBase {
@@ -42,15 +42,15 @@ abstract class AnnulusGridField extends GriddedFieldBase {
     }
 
     @Override
-    public double domainMargin(double x, double y, double zz) {
+    double gridMargin(double x, double y, double zz) {
         double rr = Math.sqrt(x * x + y * y);
         return Math.min(Math.min(rr - r[0], r[r.length - 1] - rr), Math.min(zz - z[0], z[z.length - 1] - zz));
     }
 
     @Override
-    public String domainMeaning() {
+    String gridMeaning() {
         return "the grid's annulus " + r[0] + " <= R <= " + r[r.length - 1] + " m, " + z[0] + " <= Z <= "
-                + z[z.length - 1] + " m; a particle leaving it is lost";
+                + z[z.length - 1] + " m";
     }
 
     /** The middle of the R–Z box at φ = 0. */

@@ -77,7 +77,7 @@ public final class GridField extends GriddedFieldBase {
     }
 
     @Override
-    public double domainMargin(double x, double y, double z) {
+    double gridMargin(double x, double y, double z) {
         double[] p = {x, y, z};
         double m = Double.POSITIVE_INFINITY;
         for (int a = 0; a < 3; a++) {
@@ -89,8 +89,8 @@ public final class GridField extends GriddedFieldBase {
     }
 
     @Override
-    public String domainMeaning() {
-        return "the grid box; a particle leaving it is lost";
+    String gridMeaning() {
+        return "the grid box";
     }
 
     @Override

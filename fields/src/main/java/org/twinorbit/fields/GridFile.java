@@ -32,8 +32,11 @@ import org.twinorbit.shared.FieldSample;
  *   /length_m                 [1]: the length L (m) that defines ε = ρ0/L
  *   /phi_v                    optional: the electrostatic potential Φ (V) on the nodes, shaped like
  *                             the B components; E = −∇Φ of its interpolant
+ *   /wall_r_m, /wall_z_m      optional, together: the corners (m) of a wall polygon in (R, Z), at
+ *                             least 3, the same count in each; for cartesian R = √(x² + y²), Z = z
  * </pre>
- * The domain is the grid (box or annulus); a particle leaving it is lost. Fields are static. A field of the library is named {@code grid:PATH} to load one
+ * The domain is the grid (box or annulus), inside the wall when there is one; a particle leaving
+ * the grid or crossing the wall is lost ({@link WallPolygon}'s signed distance). Fields are static. A field of the library is named {@code grid:PATH} to load one
  * ({@link Fields#create}).
  */
 public final class GridFile {
@@ -44,6 +47,8 @@ public final class GridFile {
     private static final String GEOMETRY = "geometry";
     private static final String UNIT = "unit";
     private static final String POTENTIAL = "phi_v";
+    private static final String WALL_R = "wall_r_m";
+    private static final String WALL_Z = "wall_z_m";
 
     private GridFile() {}
 
@@ -54,52 +59,78 @@ public final class GridFile {
             throw new FieldParameterException(where + ": no such file");
         }
         try (HdfFile h = new HdfFile(file)) {
-            GridGeometry g = geometry(h, where);
-            String name = PREFIX + file;
-            String meaning = "L from the grid file (/length_m)";
-            switch (g) {
-                case CARTESIAN -> {
-                    double[][] axes = {axis(h, "x_m", "m", where), axis(h, "y_m", "m", where), axis(h, "z_m", "m", where)};
-                    double[][][][] b = new double[3][][][];
-                    String[] bn = {"bx_t", "by_t", "bz_t"};
-                    for (int c = 0; c < 3; c++) {
-                        b[c] = cube(h, bn[c], "T", where, axes[0].length, axes[1].length, axes[2].length);
-                    }
-                    double[][][] pot = h.getChildren().containsKey(POTENTIAL)
-                            ? cube(h, POTENTIAL, "V", where, axes[0].length, axes[1].length, axes[2].length) : null;
-                    return new GridField(name, axes, b, pot, length(h, where), meaning);
-                }
-                case CYLINDRICAL -> {
-                    double[] r = radius(h, where);
-                    double[] phi = turn(h, where);
-                    double[] z = axis(h, "z_m", "m", where);
-                    double[][][][] b = new double[3][][][];
-                    String[] bn = {"br_t", "bphi_t", "bz_t"};
-                    for (int c = 0; c < 3; c++) {
-                        b[c] = cube(h, bn[c], "T", where, r.length, phi.length, z.length);
-                    }
-                    double[][][] pot = h.getChildren().containsKey(POTENTIAL)
-                            ? cube(h, POTENTIAL, "V", where, r.length, phi.length, z.length) : null;
-                    return new CylindricalGridField(name, r, phi, z, b, pot, length(h, where), meaning);
-                }
-                default -> {
-                    double[] r = radius(h, where);
-                    double[] z = axis(h, "z_m", "m", where);
-                    double[][][] b = new double[3][][];
-                    String[] bn = {"br_t", "bphi_t", "bz_t"};
-                    for (int c = 0; c < 3; c++) {
-                        b[c] = square(h, bn[c], "T", where, r.length, z.length);
-                    }
-                    double[][] pot = h.getChildren().containsKey(POTENTIAL)
-                            ? square(h, POTENTIAL, "V", where, r.length, z.length) : null;
-                    return new AxisymmetricGridField(name, r, z, b, pot, length(h, where), meaning);
-                }
-            }
+            GriddedFieldBase f = grid(h, file, where);
+            f.setWall(wall(h, where));
+            return f;
         } catch (FieldParameterException e) {
             throw e;
         } catch (RuntimeException e) {
             throw new FieldParameterException(where + ": not a readable grid file (" + e.getMessage() + ")");
         }
+    }
+
+    private static GriddedFieldBase grid(HdfFile h, Path file, String where) {
+        GridGeometry g = geometry(h, where);
+        String name = PREFIX + file;
+        String meaning = "L from the grid file (/length_m)";
+        switch (g) {
+            case CARTESIAN -> {
+                double[][] axes = {axis(h, "x_m", "m", where), axis(h, "y_m", "m", where), axis(h, "z_m", "m", where)};
+                double[][][][] b = new double[3][][][];
+                String[] bn = {"bx_t", "by_t", "bz_t"};
+                for (int c = 0; c < 3; c++) {
+                    b[c] = cube(h, bn[c], "T", where, axes[0].length, axes[1].length, axes[2].length);
+                }
+                double[][][] pot = h.getChildren().containsKey(POTENTIAL)
+                        ? cube(h, POTENTIAL, "V", where, axes[0].length, axes[1].length, axes[2].length) : null;
+                return new GridField(name, axes, b, pot, length(h, where), meaning);
+            }
+            case CYLINDRICAL -> {
+                double[] r = radius(h, where);
+                double[] phi = turn(h, where);
+                double[] z = axis(h, "z_m", "m", where);
+                double[][][][] b = new double[3][][][];
+                String[] bn = {"br_t", "bphi_t", "bz_t"};
+                for (int c = 0; c < 3; c++) {
+                    b[c] = cube(h, bn[c], "T", where, r.length, phi.length, z.length);
+                }
+                double[][][] pot = h.getChildren().containsKey(POTENTIAL)
+                        ? cube(h, POTENTIAL, "V", where, r.length, phi.length, z.length) : null;
+                return new CylindricalGridField(name, r, phi, z, b, pot, length(h, where), meaning);
+            }
+            default -> {
+                double[] r = radius(h, where);
+                double[] z = axis(h, "z_m", "m", where);
+                double[][][] b = new double[3][][];
+                String[] bn = {"br_t", "bphi_t", "bz_t"};
+                for (int c = 0; c < 3; c++) {
+                    b[c] = square(h, bn[c], "T", where, r.length, z.length);
+                }
+                double[][] pot = h.getChildren().containsKey(POTENTIAL)
+                        ? square(h, POTENTIAL, "V", where, r.length, z.length) : null;
+                return new AxisymmetricGridField(name, r, z, b, pot, length(h, where), meaning);
+            }
+        }
+    }
+
+    /** The optional wall: both datasets or neither, the same count of at least 3 finite corners (m). */
+    private static WallPolygon wall(HdfFile h, String where) {
+        boolean hasR = h.getChildren().containsKey(WALL_R), hasZ = h.getChildren().containsKey(WALL_Z);
+        if (!hasR && !hasZ) {
+            return null;
+        }
+        double[] r = vector(h, WALL_R, "m", where);
+        double[] z = vector(h, WALL_Z, "m", where);
+        if (r.length != z.length) {
+            throw new FieldParameterException(where + ": /" + WALL_R + " has " + r.length + " corners and /" + WALL_Z
+                    + " has " + z.length + "; the wall polygon needs the same count in each");
+        }
+        WallPolygon w = new WallPolygon(r, z);
+        if (w.size() < 3) {
+            throw new FieldParameterException(where + ": /" + WALL_R + ", /" + WALL_Z + " hold " + w.size()
+                    + " distinct corners; the wall polygon needs at least 3");
+        }
+        return w;
     }
 
     private static GridGeometry geometry(HdfFile h, String where) {
@@ -125,6 +156,14 @@ public final class GridFile {
      * @param nodes nodes per axis (at least 4)
      */
     public static void write(Field f, double[] lo, double[] hi, int[] nodes, Path file) {
+        write(f, lo, hi, nodes, null, file);
+    }
+
+    /**
+     * As {@link #write(Field, double[], double[], int[], Path)}, with a wall polygon in (R, Z)
+     * (R = √(x² + y²)), or none when wall is null.
+     */
+    public static void write(Field f, double[] lo, double[] hi, int[] nodes, WallPolygon wall, Path file) {
         double[][] axes = new double[3][];
         for (int a = 0; a < 3; a++) {
             axes[a] = nodes(lo[a], hi[a], nodes[a]);
@@ -156,6 +195,7 @@ public final class GridFile {
             put(out, "by_t", b[1], "T");
             put(out, "bz_t", b[2], "T");
             put(out, "length_m", new double[] {f.length()}, "m");
+            putWall(out, wall);
         }
     }
 
@@ -173,6 +213,12 @@ public final class GridFile {
      */
     public static void writeCylindrical(Field f, double rLo, double rHi, double zLo, double zHi, int nR, int nPhi,
                                         int nZ, Path file) {
+        writeCylindrical(f, rLo, rHi, zLo, zHi, nR, nPhi, nZ, null, file);
+    }
+
+    /** As {@link #writeCylindrical(Field, double, double, double, double, int, int, int, Path)}, with a wall or none (null). */
+    public static void writeCylindrical(Field f, double rLo, double rHi, double zLo, double zHi, int nR, int nPhi,
+                                        int nZ, WallPolygon wall, Path file) {
         double[] r = nodes(rLo, rHi, nR);
         double[] z = nodes(zLo, zHi, nZ);
         double[] phi = new double[nPhi];
@@ -206,6 +252,7 @@ public final class GridFile {
             put(out, "bphi_t", b[1], "T");
             put(out, "bz_t", b[2], "T");
             put(out, "length_m", new double[] {f.length()}, "m");
+            putWall(out, wall);
         }
     }
 
@@ -224,6 +271,12 @@ public final class GridFile {
      */
     public static void writeAxisymmetric(Field f, double rLo, double rHi, double zLo, double zHi, int nR, int nZ,
                                          Path file) {
+        writeAxisymmetric(f, rLo, rHi, zLo, zHi, nR, nZ, null, file);
+    }
+
+    /** As {@link #writeAxisymmetric(Field, double, double, double, double, int, int, Path)}, with a wall or none (null). */
+    public static void writeAxisymmetric(Field f, double rLo, double rHi, double zLo, double zHi, int nR, int nZ,
+                                         WallPolygon wall, Path file) {
         double[] r = nodes(rLo, rHi, nR);
         double[] z = nodes(zLo, zHi, nZ);
         staticWithPotential(f);
@@ -265,6 +318,7 @@ public final class GridFile {
             put(out, "bphi_t", b[1], "T");
             put(out, "bz_t", b[2], "T");
             put(out, "length_m", new double[] {f.length()}, "m");
+            putWall(out, wall);
         }
     }
 
@@ -292,6 +346,18 @@ public final class GridFile {
             a[i] = lo + (hi - lo) * i / (n - 1);
         }
         return a;
+    }
+
+    private static void putWall(WritableHdfFile out, WallPolygon wall) {
+        if (wall != null) {
+            double[] r = new double[wall.size()], z = new double[wall.size()];
+            for (int i = 0; i < r.length; i++) {
+                r[i] = wall.r(i);
+                z[i] = wall.z(i);
+            }
+            put(out, WALL_R, r, "m");
+            put(out, WALL_Z, z, "m");
+        }
     }
 
     private static void put(WritableHdfFile out, String name, Object data, String unit) {

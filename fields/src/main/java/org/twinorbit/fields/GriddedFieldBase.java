@@ -8,7 +8,9 @@ import java.util.List;
  * {@link AxisymmetricGridField}) share: their name and length, the energy invariant, Φ taken as
  * zero without a potential table, no vector potential, and the divergence check computed once.
  * Each subclass keeps its own table and evaluation; {@link AnnulusGridField} adds the R–Z domain
- * of the two curvilinear grids.
+ * of the two curvilinear grids. The domain is the grid's own (box or annulus), cut by an optional
+ * wall polygon in (R, Z) with R = √(x² + y²): the margin is the smaller of the two, so a particle
+ * leaving the grid or crossing the wall is lost.
  */
 abstract class GriddedFieldBase implements GriddedField {
 
@@ -17,6 +19,8 @@ abstract class GriddedFieldBase implements GriddedField {
     private final String meaning;
     private final List<Invariant> invariants;
     private volatile Double divergence;
+    /** The wall in (R, Z), or null; set once by {@link GridFile#read} before the field is handed out. */
+    private WallPolygon wall;
     /** Whether the nodes carry Φ as a fourth table component after B's three. */
     protected final boolean electric;
 
@@ -39,6 +43,36 @@ abstract class GriddedFieldBase implements GriddedField {
 
     /** The grid's largest extent (m), the divergence check's length when L is infinite. */
     abstract double extent();
+
+    /** The distance (m) of a Cartesian point (m) inside the grid's own box or annulus, negative outside. */
+    abstract double gridMargin(double x, double y, double z);
+
+    /** The grid's own box or annulus, in words. */
+    abstract String gridMeaning();
+
+    /** Cuts the domain by a wall polygon in (R, Z) (m); called once, before the field is used. */
+    final void setWall(WallPolygon w) {
+        this.wall = w;
+    }
+
+    /** The wall in (R, Z), or null without one. */
+    public final WallPolygon wall() {
+        return wall;
+    }
+
+    /** The grid's margin, or with a wall the smaller of it and the wall's signed distance (m). */
+    @Override
+    public final double domainMargin(double x, double y, double z) {
+        double m = gridMargin(x, y, z);
+        return wall == null ? m : Math.min(m, wall.signedDistance(Math.sqrt(x * x + y * y), z));
+    }
+
+    @Override
+    public final String domainMeaning() {
+        return wall == null ? gridMeaning() + "; a particle leaving it is lost"
+                : gridMeaning() + " and inside the wall polygon of " + wall.size() + " corners in (R, Z) from the grid "
+                + "file; a particle leaving the grid or crossing the wall is lost";
+    }
 
     @Override public String name() { return name; }
 

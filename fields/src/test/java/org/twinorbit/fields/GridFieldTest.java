@@ -22,7 +22,8 @@ import org.twinorbit.shared.Species;
  * Eng. 63, 2005, for the interpolant; the difference error is common practice), so halving the
  * spacing must cut the B error by at least 2^2.6 and the Jacobian error by 2^1.6. The
  * interpolant of the vacuum toroidal field stays divergence-free to the same order. Files that
- * are not a grid are refused with the problem named: 16 malformed HDF5 files in all.
+ * are not a grid are refused with the problem named: 16 malformed HDF5 files in all, and 4 more
+ * with a malformed wall polygon.
  */
 class GridFieldTest {
 
@@ -201,5 +202,59 @@ class GridFieldTest {
         refused(unit, "/r_m has unit 'cm'; it must be m");
         refused(curvilinear("phi-shape.h5", "axisymmetric", java.util.Map.of("phi_v", new double[4][3])),
                 "/phi_v must be a 4 x 4 array");
+    }
+
+    /**
+     * The optional wall: R = √(x² + y²), Z = z on a cartesian grid, margin the smaller of the box's
+     * and the wall's signed distance; the domain text names it. A file written without a wall is
+     * the grid box alone, as before.
+     */
+    @Test
+    void aWallCutsTheDomainInEveryGeometry() {
+        Field toroidal = Fields.create("toroidal", Species.PROTON);
+        WallPolygon wall = new WallPolygon(new double[] {0.8, 1.2, 1.2, 0.8}, new double[] {-0.2, -0.2, 0.1, 0.1});
+        Path cart = tmp.resolve("walled.h5");
+        GridFile.write(toroidal, LO, HI, new int[] {8, 8, 8}, wall, cart);
+        GriddedField g = GridFile.read(cart);
+        // at x = 0.99, R = 1: 0.05 m below the wall's top edge Z = 0.1, at least 0.15 m inside the box
+        double y = Math.sqrt(1 - 0.99 * 0.99);
+        assertEquals(0.05, g.domainMargin(0.99, y, 0.05), 1e-12);
+        assertEquals(-0.05, g.domainMargin(0.99, y, 0.15), 1e-12);
+        assertTrue(g.domainMeaning().contains("wall polygon of 4 corners"), g.domainMeaning());
+        Path axi = tmp.resolve("walled-rz.h5");
+        GridFile.writeAxisymmetric(toroidal, 0.7, 1.3, -0.3, 0.3, 6, 6, wall, axi);
+        GriddedField a = GridFile.read(axi);
+        assertEquals(0.1, a.domainMargin(0, 1.0, 0), 1e-12);
+        assertTrue(!a.inDomain(1.25, 0, 0) && a.inDomain(1.15, 0, 0));
+        assertEquals(grid(toroidal, 8, "plain.h5").domainMeaning(), "the grid box; a particle leaving it is lost");
+    }
+
+    @Test
+    void malformedWallsAreRefused() {
+        double[] r = {0.55, 0.75, 0.65};
+        double[] z = {-0.05, -0.05, 0.15};
+        refused(curvilinear("wall-lengths.h5", "axisymmetric",
+                java.util.Map.of("wall_r_m", r, "wall_z_m", new double[] {0, 0.1})),
+                "/wall_r_m has 3 corners and /wall_z_m has 2");
+        refused(curvilinear("wall-two.h5", "cylindrical",
+                java.util.Map.of("wall_r_m", new double[] {0.6, 0.7}, "wall_z_m", new double[] {0, 0.1})),
+                "hold 2 distinct corners; the wall polygon needs at least 3");
+        refused(curvilinear("wall-nan.h5", "axisymmetric",
+                java.util.Map.of("wall_r_m", r, "wall_z_m", new double[] {0, Double.NaN, 0.1})),
+                "/wall_z_m holds a value that is not finite");
+        refused(curvilinear("wall-alone.h5", "axisymmetric", java.util.Map.of("wall_r_m", r)),
+                "dataset /wall_z_m is missing");
+        Path unit = bad("wall-unit.h5", f -> {
+            f.putAttribute("geometry", "axisymmetric");
+            f.putDataset("r_m", new double[] {0.5, 0.6, 0.7, 0.8});
+            f.putDataset("z_m", new double[] {-0.1, 0, 0.1, 0.2});
+            for (String b : new String[] {"br_t", "bphi_t", "bz_t"}) {
+                f.putDataset(b, new double[4][4]);
+            }
+            f.putDataset("length_m", new double[] {1});
+            f.putDataset("wall_r_m", new double[] {55, 75, 65}).putAttribute("unit", "cm");
+            f.putDataset("wall_z_m", z);
+        });
+        refused(unit, "/wall_r_m has unit 'cm'; it must be m");
     }
 }

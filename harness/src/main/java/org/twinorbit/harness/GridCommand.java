@@ -9,6 +9,7 @@ import org.twinorbit.fields.FieldParameterException;
 import org.twinorbit.fields.Fields;
 import org.twinorbit.fields.GridFile;
 import org.twinorbit.fields.GriddedField;
+import org.twinorbit.fields.WallPolygon;
 import org.twinorbit.harness.gridstudy.GridSpec;
 import org.twinorbit.shared.Species;
 import picocli.CommandLine.Command;
@@ -43,6 +44,11 @@ public final class GridCommand implements Callable<Integer> {
     @Option(names = "--nodes", paramLabel = "COUNTS", required = true, split = ",", description = GridSpec.NODES_HELP)
     List<Integer> nodes;
 
+    @Option(names = "--wall", paramLabel = "CORNERS", split = ",", description = "A wall polygon in (R, Z) stored in "
+            + "the file: R1,Z1,R2,Z2,... (m), at least 3 corners (R = sqrt(x^2 + y^2) on a cartesian grid); a particle "
+            + "crossing it is lost. Default: none, the grid alone is the domain.")
+    List<Double> wall;
+
     @Option(names = "--out", paramLabel = "FILE", required = true, description = "The grid file to write (.h5).")
     Path out;
 
@@ -52,6 +58,7 @@ public final class GridCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         GridSpec grid = GridSpec.parse(geometry, box, nodes);
+        WallPolygon w = wall == null ? null : wall(wall);
         if (!Fields.isFile(field)) {
             try {
                 Fields.provider(field);
@@ -74,7 +81,7 @@ public final class GridCommand implements Callable<Integer> {
         }
         OutputFile.check(out, "--out");
         try {
-            grid.write(f, out);
+            grid.write(f, w, out);
         } catch (FieldParameterException e) {
             throw new BadInputException("--geometry: " + e.getMessage());
         }
@@ -82,8 +89,33 @@ public final class GridCommand implements Callable<Integer> {
         PrintWriter pw = spec.commandLine().getOut();
         pw.println("wrote " + out + ": " + field + " on the " + g.gridSummary());
         pw.println(g.divergenceSummary() + " (L = " + Format.number(g.length()) + " m)");
+        if (w != null) {
+            pw.println("wall: " + w.size() + " corners in (R, Z); " + g.domainMeaning());
+        }
         pw.println("use it as --field grid:" + out);
         pw.flush();
         return 0;
+    }
+
+    /** The --wall corners, refused unless they are pairs of finite numbers, at least 3 distinct corners. */
+    static WallPolygon wall(List<Double> v) {
+        if (v.size() % 2 != 0) {
+            throw new BadInputException("--wall: " + v.size() + " numbers given; it takes pairs R,Z (m), at least 3 "
+                    + "corners: R1,Z1,R2,Z2,R3,Z3,...");
+        }
+        double[] r = new double[v.size() / 2], z = new double[v.size() / 2];
+        for (int i = 0; i < r.length; i++) {
+            r[i] = v.get(2 * i);
+            z[i] = v.get(2 * i + 1);
+            if (!Double.isFinite(r[i]) || !Double.isFinite(z[i])) {
+                throw new BadInputException("--wall: corner " + (i + 1) + " is not finite; allowed: finite R,Z (m)");
+            }
+        }
+        WallPolygon w = new WallPolygon(r, z);
+        if (w.size() < 3) {
+            throw new BadInputException("--wall: " + w.size() + " distinct corners given; the polygon needs at least 3 "
+                    + "(R1,Z1,R2,Z2,R3,Z3,... in m)");
+        }
+        return w;
     }
 }

@@ -70,4 +70,24 @@ class GridRunTest {
         // B_z = B0 (1 + (Rm - 1) z^2 / Lm^2) with B0 = 0.5 T, Rm = 4, Lm = 1 m (docs/design.md)
         assertEquals(0.5 * (1 + 3 * 0.16), s.bz, 1e-12);
     }
+
+    /** {@code grid --wall} stores a wall polygon that the file's domain then names; bad corner lists exit 2. */
+    @Test
+    void gridStoresAWallAndRefusesBadCorners() {
+        Path file = tmp.resolve("walled.h5");
+        String wrote = TestCommandLine.succeeded("grid", "--field", "tokamak", "--geometry", "axisymmetric", "--box",
+                "0.95,2.05,-0.55,0.55", "--nodes", "6,6", "--wall", "1.1,-0.4,1.9,-0.4,1.9,0.4,1.1,0.4", "--out",
+                file.toString());
+        assertTrue(wrote.contains("wall: 4 corners in (R, Z)"), wrote);
+        org.twinorbit.fields.Field g = org.twinorbit.fields.GridFile.read(file);
+        assertTrue(g.inDomain(1.5, 0, 0) && !g.inDomain(1.5, 0, 0.45) && !g.inDomain(1.0, 0, 0));
+        String[] grid = {"grid", "--field", "tokamak", "--geometry", "axisymmetric", "--box", "0.95,2.05,-0.55,0.55",
+            "--nodes", "6,6", "--out", tmp.resolve("bad.h5").toString(), "--wall", ""};
+        for (String[] bad : new String[][] {{"1.1,-0.4,1.9,-0.4,1.9"}, {"1.1,-0.4,1.9,-0.4"}}) {
+            grid[grid.length - 1] = bad[0];
+            TestCommandLine.Outcome o = TestCommandLine.exec(grid);
+            assertEquals(2, o.code(), o.err());
+            assertTrue(o.err().contains("--wall:"), o.err());
+        }
+    }
 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.twinorbit.fields.Field;
 import org.twinorbit.fields.GridFile;
+import org.twinorbit.fields.WallPolygon;
 import org.twinorbit.fields.GridGeometry;
 import org.twinorbit.harness.BadInputException;
 
@@ -102,12 +103,17 @@ public record GridSpec(GridGeometry geometry, double[] box, int[] nodes) {
 
     /** Samples the field on this grid and writes the grid file. */
     public void write(Field f, Path file) {
+        write(f, null, file);
+    }
+
+    /** Samples the field on this grid and writes the grid file with a wall polygon in (R, Z), or none (null). */
+    public void write(Field f, WallPolygon wall, Path file) {
         switch (geometry) {
             case CARTESIAN -> GridFile.write(f, new double[] {box[0], box[2], box[4]}, new double[] {box[1], box[3], box[5]},
-                    nodes, file);
+                    nodes, wall, file);
             case CYLINDRICAL -> GridFile.writeCylindrical(f, box[0], box[1], box[2], box[3], nodes[0], nodes[1], nodes[2],
-                    file);
-            default -> GridFile.writeAxisymmetric(f, box[0], box[1], box[2], box[3], nodes[0], nodes[1], file);
+                    wall, file);
+            default -> GridFile.writeAxisymmetric(f, box[0], box[1], box[2], box[3], nodes[0], nodes[1], wall, file);
         }
     }
 
