@@ -183,18 +183,26 @@ public final class GridFile {
                 }
             }
         }
+        writeVolume(file, GridGeometry.CARTESIAN, new String[] {"x_m", "y_m", "z_m"}, new String[] {"m", "m", "m"},
+                axes, new String[] {"bx_t", "by_t", "bz_t"}, b, f.hasElectricField() ? pot : null, f.length(), wall);
+    }
+
+    /** Writes a three-dimensional grid: its axes, the B components, Φ if given (else null), L and the wall. */
+    private static void writeVolume(Path file, GridGeometry geometry, String[] axisNames, String[] axisUnits,
+                                    double[][] axes, String[] bNames, double[][][][] b, double[][][] pot, double length,
+                                    WallPolygon wall) {
         try (WritableHdfFile out = HdfFile.write(file)) {
-            out.putAttribute(GEOMETRY, GridGeometry.CARTESIAN.key());
-            if (f.hasElectricField()) {
+            out.putAttribute(GEOMETRY, geometry.key());
+            if (pot != null) {
                 put(out, POTENTIAL, pot, "V");
             }
-            put(out, "x_m", axes[0], "m");
-            put(out, "y_m", axes[1], "m");
-            put(out, "z_m", axes[2], "m");
-            put(out, "bx_t", b[0], "T");
-            put(out, "by_t", b[1], "T");
-            put(out, "bz_t", b[2], "T");
-            put(out, "length_m", new double[] {f.length()}, "m");
+            for (int a = 0; a < 3; a++) {
+                put(out, axisNames[a], axes[a], axisUnits[a]);
+            }
+            for (int c = 0; c < 3; c++) {
+                put(out, bNames[c], b[c], "T");
+            }
+            put(out, "length_m", new double[] {length}, "m");
             putWall(out, wall);
         }
     }
@@ -240,20 +248,9 @@ public final class GridFile {
                 }
             }
         }
-        try (WritableHdfFile out = HdfFile.write(file)) {
-            out.putAttribute(GEOMETRY, GridGeometry.CYLINDRICAL.key());
-            if (f.hasElectricField()) {
-                put(out, POTENTIAL, pot, "V");
-            }
-            put(out, "r_m", r, "m");
-            put(out, "phi_rad", phi, "rad");
-            put(out, "z_m", z, "m");
-            put(out, "br_t", b[0], "T");
-            put(out, "bphi_t", b[1], "T");
-            put(out, "bz_t", b[2], "T");
-            put(out, "length_m", new double[] {f.length()}, "m");
-            putWall(out, wall);
-        }
+        writeVolume(file, GridGeometry.CYLINDRICAL, new String[] {"r_m", "phi_rad", "z_m"}, new String[] {"m", "rad", "m"},
+                new double[][] {r, phi, z}, new String[] {"br_t", "bphi_t", "bz_t"}, b,
+                f.hasElectricField() ? pot : null, f.length(), wall);
     }
 
     /**
