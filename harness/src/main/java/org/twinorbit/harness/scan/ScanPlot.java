@@ -167,9 +167,49 @@ public final class ScanPlot {
                 }
             }
         }
+        classChange(c, r, lines, epsMin, epsMax);
         LogAxes.range(c, true);
         LogAxes.range(c, false);
         return c;
+    }
+
+    /**
+     * The class_change threshold in a panel of another metric: a fraction that is 0 wherever
+     * both models agree on the orbit class has no place on a log axis, so every panel carries it
+     * instead, as a dotted vertical line at its ε* in the pitch's colour, or as a legend entry
+     * naming its outcome (not-reached, lost, ...).
+     */
+    private static void classChange(XYChart c, ScanResult r, List<Line> lines, double epsMin, double epsMax) {
+        double yLo = Double.POSITIVE_INFINITY;
+        double yHi = Double.NEGATIVE_INFINITY;
+        for (XYSeries s : c.getSeriesMap().values()) {
+            for (double y : s.getYData()) {
+                if (y > 0 && Double.isFinite(y)) {
+                    yLo = Math.min(yLo, y);
+                    yHi = Math.max(yHi, y);
+                }
+            }
+        }
+        for (Threshold t : r.thresholds()) {
+            if (t.metric() != ScanMetric.CLASS_CHANGE || t.outcome() == ThresholdOutcome.NO_DATA) {
+                continue;
+            }
+            Line line = new Line(t.chargeSign(), t.pitchDeg());
+            java.awt.Color colour = PITCH_COLOURS[Math.max(0, lines.indexOf(line)) % PITCH_COLOURS.length];
+            boolean atEps = t.outcome().hasEpsStar();
+            String label = "orbit class change" + (atEps ? " from \u03b5 = " + Format.number(t.epsStar())
+                    + (r.axis().variesEnergy() && !Double.isNaN(t.energyEvStar()) ? " (" + Format.energy(t.energyEvStar()) + ")" : "")
+                    : ": " + t.outcome().label()) + line.at();
+            if (c.getSeriesMap().containsKey(label)) {
+                continue;
+            }
+            // a legend-only entry sits on a point already inside the axis ranges, drawn as nothing
+            XYSeries s = atEps ? c.addSeries(label, new double[] {t.epsStar(), t.epsStar()}, new double[] {yLo, yHi})
+                    : c.addSeries(label, new double[] {Math.sqrt(epsMin * epsMax)}, new double[] {Math.sqrt(yLo * yHi)});
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineStyle(atEps ? SeriesLines.DOT_DOT : SeriesLines.NONE);
+            s.setLineColor(colour);
+        }
     }
 
     /**
