@@ -28,6 +28,9 @@ public final class ScanPlot {
 
     private static final int WIDTH = 640;
     private static final int HEIGHT = 600;
+    /** Legend rows that leave the plot of a 600-pixel panel its room; each further row adds LEGEND_ROW_PX. */
+    private static final int LEGEND_ROWS_FITTING = 8;
+    private static final int LEGEND_ROW_PX = 20;
     /** One colour per pitch angle, the same in every panel (lines, markers and ε* alike). */
     private static final java.awt.Color[] PITCH_COLOURS = {new java.awt.Color(0x1f77b4), new java.awt.Color(0xd62728),
         new java.awt.Color(0x2ca02c), new java.awt.Color(0x9467bd), new java.awt.Color(0xff7f0e),
@@ -70,10 +73,18 @@ public final class ScanPlot {
     /** The panels of the plot, one per thresholded metric with something measured. */
     static List<XYChart> charts(ScanResult r) {
         System.setProperty("java.awt.headless", "true");
+        List<XYChart> charts = charts(r, HEIGHT);
+        // the legend sits below the plot: with many pitches and signs it would squeeze the plot
+        // away, so every panel grows by the rows of the longest legend beyond what fits
+        int rows = charts.stream().mapToInt(c -> c.getSeriesMap().size()).max().orElse(0);
+        return rows > LEGEND_ROWS_FITTING ? charts(r, HEIGHT + (rows - LEGEND_ROWS_FITTING) * LEGEND_ROW_PX) : charts;
+    }
+
+    private static List<XYChart> charts(ScanResult r, int height) {
         List<XYChart> charts = new ArrayList<>();
         for (ScanMetric m : ScanMetric.values()) {
             if (m.thresholded() && m != ScanMetric.CLASS_CHANGE) {
-                XYChart c = chart(r, m);
+                XYChart c = chart(r, m, height);
                 if (c != null) {
                     charts.add(c);
                 }
@@ -83,7 +94,7 @@ public final class ScanPlot {
     }
 
     /** The panel of one metric, or null when nothing of it was measured. */
-    private static XYChart chart(ScanResult r, ScanMetric m) {
+    private static XYChart chart(ScanResult r, ScanMetric m, int height) {
         List<ScanPoint> pts = r.points();
         double epsMin = pts.stream().mapToDouble(ScanPoint::eps).min().orElse(Double.NaN);
         double epsMax = pts.stream().mapToDouble(ScanPoint::eps).max().orElse(Double.NaN);
@@ -94,7 +105,7 @@ public final class ScanPlot {
                     + Format.energy(r.axis().energyEv().applyAsDouble(epsMax)) + ")";
         }
         Object statistic = r.settings().getOrDefault("statistic", "worst");
-        XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(m.description())
+        XYChart c = new XYChartBuilder().width(WIDTH).height(height).title(m.description())
                 .xAxisTitle(xTitle).yAxisTitle(axisTitle(m) + " (" + statistic + " phase)").build();
         c.getStyler().setChartBackgroundColor(java.awt.Color.WHITE);
         // solid thin light grid as in the case plots: the dashed default at every minor tick
@@ -190,25 +201,35 @@ public final class ScanPlot {
                 }
             }
         }
+        // outcomes without an eps* (not-reached, lost, ...) share one legend row per outcome
+        java.util.Map<String, List<String>> open = new java.util.LinkedHashMap<>();
         for (Threshold t : r.thresholds()) {
             if (t.metric() != ScanMetric.CLASS_CHANGE || t.outcome() == ThresholdOutcome.NO_DATA) {
                 continue;
             }
             Line line = new Line(t.chargeSign(), t.pitchDeg());
-            java.awt.Color colour = PITCH_COLOURS[Math.max(0, lines.indexOf(line)) % PITCH_COLOURS.length];
-            boolean atEps = t.outcome().hasEpsStar();
-            String label = "orbit class change" + (atEps ? " from \u03b5 = " + Format.number(t.epsStar())
-                    + (r.axis().variesEnergy() && !Double.isNaN(t.energyEvStar()) ? " (" + Format.energy(t.energyEvStar()) + ")" : "")
-                    : ": " + t.outcome().label()) + line.at();
-            if (c.getSeriesMap().containsKey(label)) {
+            if (!t.outcome().hasEpsStar()) {
+                open.computeIfAbsent(t.outcome().label(), k -> new ArrayList<>()).add(line.at().substring(3));
                 continue;
             }
+            java.awt.Color colour = PITCH_COLOURS[Math.max(0, lines.indexOf(line)) % PITCH_COLOURS.length];
+            String label = "orbit class change from \u03b5 = " + Format.number(t.epsStar())
+                    + (r.axis().variesEnergy() && !Double.isNaN(t.energyEvStar()) ? " (" + Format.energy(t.energyEvStar()) + ")" : "")
+                    + line.at();
+            if (!c.getSeriesMap().containsKey(label)) {
+                XYSeries s = c.addSeries(label, new double[] {t.epsStar(), t.epsStar()}, new double[] {yLo, yHi});
+                s.setMarker(SeriesMarkers.NONE);
+                s.setLineStyle(SeriesLines.DOT_DOT);
+                s.setLineColor(colour);
+            }
+        }
+        boolean all = open.size() == 1 && open.values().iterator().next().size() == lines.size();
+        for (java.util.Map.Entry<String, List<String>> e : open.entrySet()) {
             // a legend-only entry sits on a point already inside the axis ranges, drawn as nothing
-            XYSeries s = atEps ? c.addSeries(label, new double[] {t.epsStar(), t.epsStar()}, new double[] {yLo, yHi})
-                    : c.addSeries(label, new double[] {Math.sqrt(epsMin * epsMax)}, new double[] {Math.sqrt(yLo * yHi)});
+            String label = "orbit class change: " + e.getKey() + (all ? "" : " @ " + String.join("; ", e.getValue()));
+            XYSeries s = c.addSeries(label, new double[] {Math.sqrt(epsMin * epsMax)}, new double[] {Math.sqrt(yLo * yHi)});
             s.setMarker(SeriesMarkers.NONE);
-            s.setLineStyle(atEps ? SeriesLines.DOT_DOT : SeriesLines.NONE);
-            s.setLineColor(colour);
+            s.setLineStyle(SeriesLines.NONE);
         }
     }
 

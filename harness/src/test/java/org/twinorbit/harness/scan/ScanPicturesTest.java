@@ -32,6 +32,24 @@ class ScanPicturesTest {
         PictureChecks.check(panels.get(0), 640, 600, List.of("mu_jump @ 60 deg", "mu_change (ripple included) @ 60 deg"));
     }
 
+    /**
+     * With many pitches and both charge signs the legend below a panel has many rows; the panel
+     * grows with them, else the legend squeezes the plot itself away (seen on a 3-pitch, 2-sign
+     * tokamak scan before the panels grew).
+     */
+    @Test
+    void panelsGrowWithTheirLegends(@TempDir Path dir) {
+        ScanResult r = ScanTestSupport.run(dir, "--field", "mirror", "--phases", "2", "--pitch", "50,70",
+                "--charge-signs", "both", "--eps-min", "0.02", "--eps-max", "0.2", "--points", "3");
+        List<XYChart> panels = ScanPlot.charts(r);
+        int rows = panels.stream().mapToInt(c -> c.getSeriesMap().size()).max().orElseThrow();
+        org.junit.jupiter.api.Assertions.assertTrue(rows > 8, rows + " legend rows");
+        for (XYChart c : panels) {
+            org.junit.jupiter.api.Assertions.assertTrue(c.getHeight() >= 600 + (rows - 8) * 20, c.getHeight() + " px");
+            PictureChecks.check(c, 640, c.getHeight(), List.of(c.getSeriesMap().keySet().iterator().next()));
+        }
+    }
+
     @Test
     void safeUsePanelsShowEpsStarAndTheOpenOutcomes() {
         Threshold crossed = new Threshold(ScanMetric.MU_JUMP, 0.01, PhaseStatistic.WORST, 60, ThresholdOutcome.CROSSED,
