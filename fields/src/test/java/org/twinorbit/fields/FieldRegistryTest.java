@@ -10,7 +10,12 @@ import org.junit.jupiter.api.Test;
 import org.twinorbit.shared.FieldSample;
 import org.twinorbit.shared.Species;
 
-/** The field library as users see it: names, parameters, and refusals of bad input. */
+/**
+ * The field library as users see it: names, parameters, and refusals of bad input. The defaults
+ * checked are the project's own scenarios as tabled in docs/design.md (not physical constants);
+ * the one physics limit, E0 < c B0 in the crossed field (an E×B drift slower than light), is a
+ * textbook fact (Jackson, Classical Electrodynamics, 3rd ed., 1999, §12.3).
+ */
 class FieldRegistryTest {
 
     private static final Species P = Species.PROTON;

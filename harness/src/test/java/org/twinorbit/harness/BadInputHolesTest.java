@@ -12,7 +12,9 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Inputs that used to crash or pass silently (the project's bad-input rules, docs/design.md):
- * each is refused with exit 2 and a message naming the option, and nothing is written.
+ * each is refused with exit 2 and a message naming the option, and nothing is written. Software
+ * behaviour only, no physics values (exit code 2 for usage errors is common practice, as in
+ * picocli's own examples).
  */
 class BadInputHolesTest {
 

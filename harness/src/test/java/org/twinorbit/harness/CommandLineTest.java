@@ -10,7 +10,11 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** The command line run in-process: exit codes, messages, and that bad input runs nothing. */
+/**
+ * The command line run in-process: exit codes, messages, and that bad input runs nothing.
+ * Software behaviour only, no physics values (in-process command tests asserting code, message
+ * and that no work ran are common practice, as in picocli's own examples).
+ */
 class CommandLineTest {
 
     @TempDir

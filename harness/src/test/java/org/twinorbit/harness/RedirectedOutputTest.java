@@ -16,7 +16,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The tool as a user runs it with {@code > out.txt 2> err.txt}: a separate process whose stdout
  * and stderr are files. Not one escape byte may reach either file, the first byte included, even
- * with a colour-capable TERM.
+ * with a colour-capable TERM. Software behaviour only, no physics values (escape sequences only
+ * for a terminal is common practice of command-line tools).
  */
 class RedirectedOutputTest {
 

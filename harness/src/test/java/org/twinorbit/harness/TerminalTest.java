@@ -16,7 +16,8 @@ import picocli.CommandLine;
 
 /**
  * No escape sequence reaches a stream that is not a terminal. Under the test runner stdout and
- * stderr are pipes, as in {@code twinorbit suite 2>err.txt >out.txt}.
+ * stderr are pipes, as in {@code twinorbit suite 2>err.txt >out.txt}. Software behaviour only,
+ * no physics values (escape sequences only for a terminal is common practice).
  */
 class TerminalTest {
 

@@ -4,7 +4,11 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.twinorbit.harness.report.PictureChecks;
 
-/** The work-precision plot renders at its size, is not blank and has its series. */
+/**
+ * The work-precision plot renders at its size, is not blank and has its series. A picture test,
+ * no physics values: the numbers plotted are checked in PrecisionCommandTest against Boris's
+ * closed-form phase error.
+ */
 class PrecisionPictureTest {
 
     @Test

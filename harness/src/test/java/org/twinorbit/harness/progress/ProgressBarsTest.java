@@ -10,7 +10,11 @@ import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarConsumer;
 import org.junit.jupiter.api.Test;
 
-/** What the bar reads: a percentage, a count of what it counts, and the time left. */
+/**
+ * What the bar reads: a percentage, a count of what it counts, and the time left. Software
+ * behaviour only, no physics values (time left = work left / rate of the work done in this
+ * process is common practice).
+ */
 class ProgressBarsTest {
 
     /** Keeps what the bar draws. */
