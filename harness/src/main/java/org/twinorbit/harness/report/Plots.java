@@ -206,7 +206,13 @@ public final class Plots {
             List<ResultRow> family = shown.stream().filter(x -> x.model().equals(model)).toList();
             if (!family.isEmpty()) {
                 double floor = model.equals("full-orbit") ? sw.fullOrbitReferenceError() : sw.guidingCenterReferenceError();
-                guides(c, family, model, floor, tc);
+                // a slope guide beside errors at round-off (order not measurable) would only
+                // stretch the axis decades below them
+                List<ResultRow> measured = family.stream().filter(x -> !Double.isNaN(x.order())).toList();
+                if (!measured.isEmpty()) {
+                    guides(c, measured, model, tc);
+                }
+                floorLine(c, family, model, floor, tc);
             }
         }
         LogAxes.range(c, false);
@@ -252,11 +258,10 @@ public final class Plots {
     }
 
     /**
-     * Slope guides of order 2 and 4 over a sweep's dt range, starting a factor 3 below its
-     * smallest error at the coarsest step, and the reference's own error as a horizontal line:
-     * points near it measure the reference, not the integrator.
+     * Slope guides of order 2 and 4 over a sweep's dt range (Tc units), starting a factor 3 below
+     * its smallest error at the coarsest step.
      */
-    private static void guides(XYChart c, List<ResultRow> family, String model, double floor, double tc) {
+    private static void guides(XYChart c, List<ResultRow> family, String model, double tc) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = 0;
         double start = Double.POSITIVE_INFINITY;
@@ -280,7 +285,16 @@ public final class Plots {
             c.addAnnotation(new org.knowm.xchart.AnnotationText("\u221d dt" + (order == 2 ? "\u00b2" : "\u2074"),
                     lo, Math.max(y1, LOG_FLOOR), false));
         }
-        if (floor > LOG_FLOOR && Double.isFinite(floor)) {
+    }
+
+    /**
+     * The reference's own error as a horizontal line over the family's dt range (Tc units): points
+     * near it measure the reference, not the integrator.
+     */
+    private static void floorLine(XYChart c, List<ResultRow> family, String model, double floor, double tc) {
+        double lo = family.stream().flatMapToDouble(r -> java.util.Arrays.stream(r.convergenceDt())).min().orElse(Double.NaN) / tc;
+        double hi = family.stream().flatMapToDouble(r -> java.util.Arrays.stream(r.convergenceDt())).max().orElse(Double.NaN) / tc;
+        if (floor > LOG_FLOOR && Double.isFinite(floor) && Double.isFinite(lo)) {
             XYSeries f = c.addSeries(floorName(model), new double[] {lo, hi}, new double[] {floor, floor});
             f.setMarker(SeriesMarkers.NONE);
             f.setLineColor(model.equals("full-orbit") ? REFERENCE_LINE : GUIDE);

@@ -109,6 +109,24 @@ class PlotsPictureTest {
         assertTrue(c.getXAxisTitle().contains("dt, dt/2, dt/4, dt/8"), c.getXAxisTitle());
     }
 
+    /**
+     * In the crossed field gc-rk4 is exact (uniform E×B drift, Northrop 1963): its errors sit at
+     * round-off, its order is not measurable, and it gets no slope guide (a guide decades below
+     * its points stretched the axis before).
+     */
+    @Test
+    void noSlopeGuideBesideErrorsAtRoundOff() {
+        CaseSpec s = TestCases.spec("crossed", "boris", "gc-rk4");
+        s.phases = 1;
+        s.duration = 10.0;
+        CaseResult r = TestCases.run(s);
+        assertTrue(r.rows().stream().anyMatch(x -> x.integrator().equals("gc-rk4") && Double.isNaN(x.order())),
+                "gc-rk4's order in the crossed field is not measurable");
+        XYChart c = Plots.convergence(r);
+        assertTrue(c.getSeriesMap().containsKey(Plots.guideName("full-orbit", 2)));
+        assertFalse(c.getSeriesMap().containsKey(Plots.guideName("guiding-center", 2)), c.getSeriesMap().keySet().toString());
+    }
+
     @Test
     void planePanelsAreOneToOneInReadableUnits() {
         // the tokamak's R-z panel: a banana must not be squashed
