@@ -78,8 +78,9 @@ public final class Plots {
     static final String ENERGY_REFERENCE = "full-orbit reference (its own error)";
 
     static XYChart mu(CaseResult r) {
-        XYChart c = chart("gyro-averaged \u03bc: |\u27e8\u03bc\u27e9k / \u27e8\u03bc\u27e90 \u2212 1| along the orbit, "
-                + r.resolved().spec().name() + " (phase 0)", "t / Tc", "|\u27e8\u03bc\u27e9k / \u27e8\u03bc\u27e90 \u2212 1|");
+        // the formula is the axis title; the title stays short enough not to be clipped
+        XYChart c = chart("change of the gyro-averaged \u03bc along the orbit, " + r.resolved().spec().name() + " (phase 0)",
+                "t / Tc", "|\u27e8\u03bc\u27e9k / \u27e8\u03bc\u27e90 \u2212 1|");
         timeCurves(c, r.muCurves(), MU_REFERENCE, r.resolved().gyroPeriod(), 1);
         return c;
     }
